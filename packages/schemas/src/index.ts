@@ -1,0 +1,6 @@
+export * from "./errors.js";
+export * from "./roles.js";
+export * from "./auth.js";
+export * from "./people.js";
+export * from "./projects.js";
+export * from "./plans.js";
