@@ -1,0 +1,63 @@
+/** Public API of @hushmark/acoustics. */
+export {
+  THIRD_OCTAVE,
+  OCTAVE,
+  OCTAVE_RATIO_G,
+  bandSet,
+  bandCount,
+  bandIndexOf,
+  bandMidFrequencyHz,
+  bandEdgesHz,
+} from "./bands/bands.js";
+export type { BandSet, BandSetId } from "./bands/bands.js";
+
+export {
+  NETWORK_FORMAT,
+  NETWORK_FORMAT_VERSION,
+  networkSchema,
+  networkShapeSchema,
+  spaceSchema,
+  spaceKindSchema,
+  partSchema,
+  partKindSchema,
+  tlPartSchema,
+  openPartSchema,
+  dnePartSchema,
+  linkSchema,
+  partitionLinkSchema,
+  ventLinkSchema,
+  floorLinkSchema,
+  flankingLinkSchema,
+  flankingElementSchema,
+  impactDataSchema,
+  attenuationPartSchema,
+  sourceSchema,
+  airborneSourceSchema,
+  impactSourceSchema,
+  buildingSchema,
+  bandSetIdSchema,
+  bandValuesSchema,
+  bandValuesOrScalarSchema,
+} from "./network/schema.js";
+export type {
+  Network,
+  NetworkInput,
+  Space,
+  SpaceKind,
+  Part,
+  TlPart,
+  OpenPart,
+  DnePart,
+  Link,
+  LinkType,
+  PartitionLink,
+  VentLink,
+  FloorLink,
+  FlankingLink,
+  FlankingElement,
+  Source,
+  AirborneSource,
+  ImpactSource,
+} from "./network/schema.js";
+export { parseNetwork, jsonPath, inputIssues } from "./network/parse.js";
+export type { InputIssue, ParseResult } from "./network/parse.js";
