@@ -1,0 +1,18 @@
+import { useParams } from "react-router-dom";
+import { EmptyState } from "../../components/ui/empty-state";
+import { useCurrentMe } from "../../features/auth/api/get-me";
+import { PlanSummary } from "../../features/projects/components/plan-summary";
+import { SectionPlaceholder } from "../../features/projects/components/section-placeholder";
+import type { ProjectSection } from "../../features/projects/components/sections";
+import { can } from "../../lib/permissions";
+
+export function ProjectSectionRoute({ section }: { section: ProjectSection }) {
+  const { projectId = "" } = useParams();
+  const me = useCurrentMe();
+
+  if (!section.clientVisible && !can.seeAllSections(me.membership.role)) {
+    return <EmptyState title={`${section.label} is for the firm's team`}>Your contractor shares the plan, the sound paths, the proposal and the verification with you.</EmptyState>;
+  }
+
+  return <SectionPlaceholder section={section}>{section.slug === "sketch" ? <PlanSummary projectId={projectId} /> : null}</SectionPlaceholder>;
+}

@@ -1,0 +1,45 @@
+import { fileURLToPath } from "node:url";
+import tailwindcss from "@tailwindcss/vite";
+import react from "@vitejs/plugin-react";
+import { defineConfig } from "vite";
+
+const apiTarget = "http://127.0.0.1:8080";
+
+export default defineConfig({
+  plugins: [react(), tailwindcss()],
+  resolve: {
+    // Read the shared schemas from source so the web app never runs against a stale build of them.
+    alias: {
+      "@hushmark/schemas": fileURLToPath(new URL("../schemas/src/index.ts", import.meta.url)),
+    },
+  },
+  server: {
+    proxy: {
+      "/api": { target: apiTarget, changeOrigin: false },
+      "/dev": { target: apiTarget, changeOrigin: false },
+    },
+  },
+  preview: {
+    proxy: {
+      "/api": { target: apiTarget, changeOrigin: false },
+      "/dev": { target: apiTarget, changeOrigin: false },
+    },
+  },
+  build: {
+    outDir: "dist",
+    emptyOutDir: true,
+    sourcemap: true,
+    rolldownOptions: {
+      output: {
+        // Libraries change far less often than our code; separate chunks keep them cached across releases.
+        codeSplitting: {
+          groups: [
+            { name: "react", test: /node_modules[\\/](react|react-dom|scheduler|react-router|react-router-dom)[\\/]/, priority: 30 },
+            { name: "data", test: /node_modules[\\/](@tanstack|zod|react-hook-form|@hookform)[\\/]/, priority: 20 },
+            { name: "vendor", test: /node_modules[\\/]/, priority: 10 },
+          ],
+        },
+      },
+    },
+  },
+});
