@@ -1,0 +1,115 @@
+import "reflect-metadata";
+import cookieParser from "cookie-parser";
+import express, { type Express } from "express";
+import helmet from "helmet";
+import { pino, type Logger } from "pino";
+import { pinoHttp } from "pino-http";
+import type { DataSource } from "typeorm";
+import { auditRouter } from "./audit/audit.router.js";
+import { authRouter } from "./auth/auth.router.js";
+import { createAuthService } from "./auth/auth.service.js";
+import { DEFAULT_SIGN_IN_LIMITS, addressLimiter, signInLimiters, type LimitSettings } from "./auth/rate-limit.js";
+import { createSessions } from "./auth/sessions.js";
+import type { AppConfig } from "./config.js";
+import { devMailRouter } from "./dev/dev-mail.router.js";
+import { csrfGuard } from "./http/csrf.js";
+import { errorHandler, HttpError } from "./http/errors.js";
+import { healthRouter } from "./http/health.js";
+import { webAppRouter } from "./http/static.js";
+import { createMailer, type Mailer } from "./mail/mailer.js";
+import { createPeopleService } from "./people/people.service.js";
+import { peopleRouter } from "./people/people.router.js";
+import { planRoutes } from "./plans/plans.routes.js";
+import { createPlansService, type PlanDocumentCheck } from "./plans/plans.service.js";
+import { projectsRouter } from "./projects/projects.router.js";
+import { createProjectsService, type EmptyPlanFactory } from "./projects/projects.service.js";
+
+export { loadConfig, type AppConfig } from "./config.js";
+export { createDataSource } from "./data-source.js";
+export { routeTable } from "./http/routes.js";
+
+export interface AppDeps {
+  dataSource: DataSource;
+  config: AppConfig;
+  logger?: Logger;
+  mailer?: Mailer;
+  signInLimits?: LimitSettings;
+  /** Per-address limit on sign-up, reset and invitation acceptance, per 15 minutes. */
+  accountLimitPerAddress?: number;
+  emptyPlan?: EmptyPlanFactory;
+  checkPlan?: PlanDocumentCheck;
+}
+
+const PLAN_PUT = /^\/v1\/projects\/[^/]+\/plan$/;
+
+/** Builds the Express app over a connected DataSource; `index.ts` is what listens. */
+export function createApp(deps: AppDeps): { app: Express; mailer: Mailer } {
+  const { dataSource, config } = deps;
+  const logger = deps.logger ?? pino({ level: config.logLevel });
+  const mailer = deps.mailer ?? createMailer(config, logger);
+  const app = express();
+  app.disable("x-powered-by");
+  if (config.trustProxy) app.set("trust proxy", /^\d+$/.test(config.trustProxy) ? Number(config.trustProxy) : config.trustProxy);
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: false,
+        directives: {
+          defaultSrc: ["'self'"],
+          baseUri: ["'none'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", "data:", "blob:"],
+          fontSrc: ["'self'"],
+          connectSrc: ["'self'"],
+          mediaSrc: ["'self'", "blob:"],
+          workerSrc: ["'self'", "blob:"],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          formAction: ["'self'"],
+          ...(config.env === "production" ? { upgradeInsecureRequests: [] } : {}),
+        },
+      },
+      crossOriginEmbedderPolicy: false,
+    }),
+  );
+  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === "/api/v1/health" } }));
+  app.use(cookieParser());
+
+  const small = express.json({ limit: "256kb" });
+  const large = express.json({ limit: "10mb" });
+  app.use("/api", (req, res, next) => (req.method === "PUT" && PLAN_PUT.test(req.path) ? large : small)(req, res, next));
+  app.use("/api", csrfGuard([config.publicUrl]));
+
+  app.use(healthRouter(dataSource));
+  if (config.env !== "production") app.use(devMailRouter(config));
+
+  const sessions = createSessions(dataSource, config);
+  const auth = createAuthService(dataSource, config, mailer);
+  const people = createPeopleService(dataSource, config, mailer);
+  const projects = createProjectsService(dataSource, deps.emptyPlan ?? (() => ({})));
+  const plans = createPlansService(dataSource, projects, deps.checkPlan ?? (() => []));
+  const perAddress = deps.accountLimitPerAddress ?? 30;
+
+  const api = express.Router();
+  api.use(
+    authRouter({
+      auth,
+      sessions,
+      config,
+      signInLimit: signInLimiters(dataSource, deps.signInLimits ?? DEFAULT_SIGN_IN_LIMITS),
+      resetLimit: addressLimiter(dataSource, "account", 15 * 60_000, perAddress),
+    }),
+  );
+  api.use(peopleRouter(people, sessions, addressLimiter(dataSource, "accept", 15 * 60_000, perAddress)));
+  api.use(projectsRouter(projects, sessions, planRoutes(plans)));
+  api.use(auditRouter(dataSource, sessions));
+  api.use((req, _res, next) => next(new HttpError(404, "not_found", `There is no ${req.method} ${req.baseUrl}${req.path} in this API.`)));
+
+  // Each router registers its routes with their own prefix (`/auth`, `/people`, …) relative to /api/v1.
+  app.use("/api/v1", api);
+  app.use(webAppRouter(config.webDist));
+  app.use(errorHandler(logger));
+  return { app, mailer };
+}

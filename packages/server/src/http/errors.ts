@@ -1,0 +1,63 @@
+import type { ErrorRequestHandler } from "express";
+import { ZodError } from "zod";
+import type { Logger } from "pino";
+
+/** An error a route may throw on purpose; the error handler answers it as is. */
+export class HttpError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly details?: unknown,
+    readonly headers?: Record<string, string>,
+  ) {
+    super(message);
+  }
+}
+
+export const badRequest = (message: string, details?: unknown) => new HttpError(400, "invalid_input", message, details);
+export const notSignedIn = (message = "Please sign in.") => new HttpError(401, "not_signed_in", message);
+export const forbidden = (message = "Your role does not allow this.") => new HttpError(403, "forbidden", message);
+export const notFound = (what = "That record") => new HttpError(404, "not_found", `${what} was not found.`);
+export const conflict = (code: string, message: string, details?: unknown) => new HttpError(409, code, message, details);
+
+/** Turns zod issues into `{ path, message }` pairs with dotted field paths. */
+export function fieldIssues(error: ZodError): { path: string; message: string }[] {
+  return error.issues.map((issue) => ({ path: issue.path.map(String).join(".") || "(body)", message: issue.message }));
+}
+
+interface BodyParserError extends Error {
+  type?: string;
+  status?: number;
+}
+
+/** The one error handler: known errors answer their status and message, the rest a 500 without detail. */
+export function errorHandler(logger: Logger): ErrorRequestHandler {
+  return (error, req, res, _next) => {
+    if (res.headersSent) return;
+    if (error instanceof ZodError) {
+      res.status(400).json({ error: { code: "invalid_input", message: "Some fields need attention.", details: fieldIssues(error) } });
+      return;
+    }
+    if (error instanceof HttpError) {
+      if (error.headers) res.set(error.headers);
+      res.status(error.status).json({ error: { code: error.code, message: error.message, ...(error.details === undefined ? {} : { details: error.details }) } });
+      return;
+    }
+    const parserError = error as BodyParserError;
+    if (parserError.type === "entity.parse.failed") {
+      res.status(400).json({ error: { code: "invalid_json", message: "The request body is not valid JSON." } });
+      return;
+    }
+    if (parserError.type === "entity.too.large") {
+      res.status(413).json({ error: { code: "too_large", message: "The request body is too large." } });
+      return;
+    }
+    if (parserError.status && parserError.status >= 400 && parserError.status < 500) {
+      res.status(parserError.status).json({ error: { code: "bad_request", message: parserError.message } });
+      return;
+    }
+    logger.error({ err: error, url: req.originalUrl, method: req.method }, "unhandled error");
+    res.status(500).json({ error: { code: "internal", message: "Something went wrong on our side. Nothing you sent was lost; please try again." } });
+  };
+}

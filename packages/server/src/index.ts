@@ -1,0 +1,51 @@
+import "reflect-metadata";
+import { createServer } from "node:http";
+import { fileURLToPath } from "node:url";
+import { pino } from "pino";
+import { createApp } from "./app.js";
+import { loadConfig } from "./config.js";
+import { createDataSource } from "./data-source.js";
+import { emptyPlanDocument, planDocumentCheck } from "./plans/plan-documents.js";
+
+const config = loadConfig();
+const logger = pino({ level: config.logLevel });
+const webDist = config.webDist ?? fileURLToPath(new URL("../../web/dist", import.meta.url));
+const dataSource = createDataSource(config.databaseUrl);
+
+async function connectWithRetry(attempts = 30): Promise<void> {
+  for (let i = 1; ; i += 1) {
+    try {
+      await dataSource.initialize();
+      return;
+    } catch (error) {
+      if (i >= attempts) throw error;
+      logger.warn({ attempt: i }, "database not reachable yet; retrying in 1 s");
+      await new Promise((r) => setTimeout(r, 1000));
+    }
+  }
+}
+
+await connectWithRetry();
+const pending = await dataSource.showMigrations();
+if (pending) logger.warn("there are migrations that have not run; run `npm run -w @hushmark/server migrate`");
+
+const { app, mailer } = createApp({ dataSource, config: { ...config, webDist }, logger, emptyPlan: emptyPlanDocument, checkPlan: planDocumentCheck });
+const server = createServer(app);
+server.listen(config.port, config.host, () => {
+  logger.info({ url: config.publicUrl }, "Hushmark is listening");
+});
+
+let stopping = false;
+async function shutdown(signal: string) {
+  if (stopping) return;
+  stopping = true;
+  logger.info({ signal }, "shutting down");
+  server.close();
+  server.closeIdleConnections();
+  setTimeout(() => server.closeAllConnections(), 3000).unref();
+  mailer.close();
+  await dataSource.destroy().catch(() => undefined);
+  process.exit(0);
+}
+process.on("SIGINT", () => void shutdown("SIGINT"));
+process.on("SIGTERM", () => void shutdown("SIGTERM"));
