@@ -1,0 +1,45 @@
+import { NETWORK_FORMAT, NETWORK_FORMAT_VERSION, type NetworkInput } from "@hushmark/acoustics";
+import type { Catalogue } from "../catalogue/types.js";
+import type { Plan } from "../document/schema.js";
+import { planWallPieces } from "../geometry/walls.js";
+import { planIsAnalysable, validatePlan } from "../validation/validate.js";
+import { buildContext } from "./context.js";
+import { buildFlankingLinks } from "./flanking.js";
+import { buildFloorLinks } from "./floors.js";
+import { buildSpaces } from "./spaces.js";
+import type { BuildOptions, BuildResult, LinkInput, LinkTrace, NetworkSourceInput } from "./types.js";
+import { buildVentLinks } from "./vents.js";
+import { buildWallLinks } from "./walls.js";
+import { OUTDOORS_ID } from "../document/ids.js";
+
+/**
+ * Turns a plan and a catalogue into the engine's network (docs/network-format.md): rooms, voids,
+ * neighbours and the outdoors as spaces; walls with their openings and leaks, floors, ceilings,
+ * ducts and flanking paths as links, each with `ref` the plan element it came from. A plan with
+ * errors is not built: its problems are returned instead. Units as in the network format.
+ */
+export function buildNetwork(plan: Plan, catalogue: Catalogue, options: BuildOptions = {}): BuildResult {
+  const pieces = planWallPieces(plan);
+  const problems = validatePlan(plan, catalogue, pieces);
+  if (!planIsAnalysable(problems)) return { ok: false, problems };
+  const ctx = buildContext(plan, catalogue, pieces);
+  const parts = [buildWallLinks(ctx), buildFloorLinks(ctx), buildVentLinks(ctx), ...(options.flanking === false ? [] : [buildFlankingLinks(ctx)])];
+  const links: LinkInput[] = parts.flatMap((p) => p.links);
+  const traces: Record<string, LinkTrace> = {};
+  for (const p of parts) for (const t of p.traces) traces[t.linkId] = t;
+  const needsOutdoors = links.some((l) => l.between.includes(OUTDOORS_ID)) || (options.sources ?? []).some((s) => s.type === "airborne" && s.spaceId === OUTDOORS_ID);
+  const { spaces, traces: spaceTraces } = buildSpaces(ctx, needsOutdoors);
+  const sources: NetworkSourceInput[] = [];
+  for (const s of options.sources ?? []) {
+    if (s.type === "airborne") {
+      sources.push({ type: "airborne", space: s.spaceId, levels_db: [...s.levelsDb] });
+    } else {
+      for (const l of links) {
+        if (l.type !== "floor" || l.between[0] !== s.roomId || !("impact" in l) || !l.impact) continue;
+        sources.push({ type: "impact", floor: l.id, ...(s.lnOffsetDb ? { ln_db: l.impact.ln_db.map((v) => v + s.lnOffsetDb!) } : {}) });
+      }
+    }
+  }
+  const network: NetworkInput = { format: NETWORK_FORMAT, version: NETWORK_FORMAT_VERSION, bands: "third-octave", name: plan.name, spaces, links, sources };
+  return { ok: true, network, links: traces, spaces: spaceTraces, assumptions: problems };
+}
