@@ -22,7 +22,7 @@ export class AuditEvent {
   @Column({ type: "varchar", length: 64, name: "entity_id", nullable: true })
   entityId!: string | null;
 
-  @Column({ type: "jsonb", default: () => "'{}'::jsonb" })
+  @Column({ type: "jsonb" })
   data!: Record<string, unknown>;
 
   @CreateDateColumn({ type: "timestamptz", name: "created_at" })
