@@ -1,9 +1,25 @@
 import { fileURLToPath } from "node:url";
 import tailwindcss from "@tailwindcss/vite";
 import react from "@vitejs/plugin-react";
-import { defineConfig } from "vite";
+import { defineConfig, type ProxyOptions } from "vite";
 
 const apiTarget = "http://127.0.0.1:8080";
+
+// The server refuses state-changing requests from an Origin other than its own (CSRF guard);
+// behind this proxy the browser's origin is Vite's, so present the request as the server's own.
+const proxy: Record<string, ProxyOptions> = Object.fromEntries(
+  ["/api", "/dev"].map((prefix) => [
+    prefix,
+    {
+      target: apiTarget,
+      configure: (server) => {
+        server.on("proxyReq", (request) => {
+          if (request.getHeader("origin")) request.setHeader("origin", apiTarget);
+        });
+      },
+    } satisfies ProxyOptions,
+  ]),
+);
 
 export default defineConfig({
   plugins: [react(), tailwindcss()],
@@ -13,18 +29,8 @@ export default defineConfig({
       "@hushmark/schemas": fileURLToPath(new URL("../schemas/src/index.ts", import.meta.url)),
     },
   },
-  server: {
-    proxy: {
-      "/api": { target: apiTarget, changeOrigin: false },
-      "/dev": { target: apiTarget, changeOrigin: false },
-    },
-  },
-  preview: {
-    proxy: {
-      "/api": { target: apiTarget, changeOrigin: false },
-      "/dev": { target: apiTarget, changeOrigin: false },
-    },
-  },
+  server: { proxy },
+  preview: { proxy },
   build: {
     outDir: "dist",
     emptyOutDir: true,

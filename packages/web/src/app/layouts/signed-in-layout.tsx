@@ -38,7 +38,7 @@ export function SignedInLayout() {
       </a>
       <header className="sticky top-0 z-10 border-b border-rule bg-panel/95 backdrop-blur">
         <div className="mx-auto flex max-w-6xl items-center gap-3 px-4 py-1.5">
-          <Link to={paths.projects} aria-label="Hushmark, go to projects" className="flex min-h-11 items-center rounded-md">
+          <Link to={paths.projects} aria-label="Hushmark home" className="flex min-h-11 items-center rounded-md">
             <Wordmark />
           </Link>
           <span aria-hidden="true" className="h-6 w-px bg-rule" />

@@ -61,14 +61,17 @@ export function PeopleRoute() {
   return (
     <>
       <PageHeader title="People" description={`Who can work in ${me.membership.organizationName}, and as what.`} />
-      <div className="flex flex-col gap-6">
-        <Card>
+      {/* On a laptop the invite form sits beside the lists; on a tablet it comes first. */}
+      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_24rem]">
+        <Card className="lg:sticky lg:top-20 lg:order-2">
           <CardHeader title="Invite someone" description="They get an e-mail with a link to set their name and password." />
           <div className="p-5">
             <InviteForm />
           </div>
         </Card>
-        <PeopleLists myUserId={me.user.id} />
+        <div className="flex min-w-0 flex-col gap-6 lg:order-1">
+          <PeopleLists myUserId={me.user.id} />
+        </div>
       </div>
     </>
   );

@@ -8,10 +8,11 @@ export function SignInRoute() {
   const navigate = useNavigate();
   const [params] = useSearchParams();
   const next = params.get("next");
+  const returning = safeNextPath(next) !== paths.projects;
   return (
     <AuthCard
       title="Sign in"
-      description={next ? "Sign in to continue where you were." : "Welcome back to Hushmark."}
+      description={returning ? "Sign in to continue where you were." : "Welcome back to Hushmark."}
       footer={
         <>
           <AuthLink to={paths.forgotPassword}>Forgot your password?</AuthLink>

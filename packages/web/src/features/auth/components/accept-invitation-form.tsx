@@ -10,12 +10,18 @@ import { useAcceptInvitation } from "../api/accept-invitation";
 
 type Values = z.input<typeof acceptInvitationSchema>;
 
+function placeholderName(email: string): string {
+  return (email.split("@")[0] ?? "").slice(0, 120) || "Member";
+}
+
 export function AcceptInvitationForm({ token, preview, onAccepted }: { token: string; preview: InvitationPreview; onAccepted: (me: Me) => void }) {
   const [formError, setFormError] = useState<string | null>(null);
   const accept = useAcceptInvitation();
   const { register, handleSubmit, setError, formState } = useForm<Values, unknown, z.output<typeof acceptInvitationSchema>>({
     resolver: zodResolver(acceptInvitationSchema),
-    defaultValues: { token, displayName: "", password: "" },
+    // Someone who already has an account keeps their name; the schema still wants one, and the
+    // server ignores it for them, so fill it quietly instead of asking.
+    defaultValues: { token, displayName: preview.existingUser ? placeholderName(preview.email) : "", password: "" },
   });
 
   const onSubmit = handleSubmit(async (values) => {
@@ -31,7 +37,7 @@ export function AcceptInvitationForm({ token, preview, onAccepted }: { token: st
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4" aria-label="Accept the invitation">
       <FormMessage>{formError ?? (formState.errors.token?.message || null)}</FormMessage>
       <Input label="E-mail" type="email" value={preview.email} readOnly autoComplete="username" hint="The invitation was sent to this address." />
-      <Input label="Your name" autoComplete="name" error={formState.errors.displayName?.message} {...register("displayName")} />
+      {preview.existingUser ? null : <Input label="Your name" autoComplete="name" error={formState.errors.displayName?.message} {...register("displayName")} />}
       <Input
         label="Password"
         type="password"

@@ -37,7 +37,7 @@ export function InviteForm() {
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4" aria-label="Invite someone">
       <FormMessage>{formError}</FormMessage>
-      <div className="grid gap-4 md:grid-cols-2">
+      <div className="grid gap-4 md:grid-cols-2 lg:grid-cols-1">
         <Input label="E-mail" type="email" autoComplete="off" inputMode="email" error={formState.errors.email?.message} {...register("email")} />
         <Input
           label="Name (optional)"
