@@ -1,0 +1,89 @@
+import { randomUUID } from "node:crypto";
+import type supertest from "supertest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { ROLES, type Role } from "@hushmark/schemas";
+import { routeTable, type Access } from "../src/http/routes.js";
+import { addMember, newFirm, startHarness, type Harness } from "./harness.js";
+
+/**
+ * The documented role matrix (docs/roles.md). Every route the app registers must appear here;
+ * a new route without an entry fails the first test.
+ */
+const EXPECTED: Record<string, Access> = {
+  "post /auth/sign-up": "public",
+  "post /auth/sign-in": "public",
+  "post /auth/refresh": "public",
+  "post /auth/sign-out": "signed-in",
+  "get /auth/me": "signed-in",
+  "post /auth/switch-firm": "signed-in",
+  "post /auth/password": "signed-in",
+  "post /auth/password-reset/request": "public",
+  "post /auth/password-reset": "public",
+  "get /people": ["owner"],
+  "post /people/invitations": ["owner"],
+  "delete /people/invitations/:id": ["owner"],
+  "patch /people/members/:id": ["owner"],
+  "delete /people/members/:id": ["owner"],
+  "get /invitations/:token": "public",
+  "post /invitations/accept": "public",
+  "get /projects": "signed-in",
+  "post /projects": ["owner", "surveyor"],
+  "get /projects/:projectId": "signed-in",
+  "patch /projects/:projectId": ["owner", "surveyor"],
+  "post /projects/:projectId/clients": ["owner", "surveyor"],
+  "delete /projects/:projectId/clients/:membershipId": ["owner", "surveyor"],
+  "get /projects/:projectId/plan": "signed-in",
+  "put /projects/:projectId/plan": ["owner", "surveyor"],
+  "get /projects/:projectId/plan/revisions": ["owner", "surveyor", "planner"],
+  "get /projects/:projectId/plan/revisions/:version": ["owner", "surveyor", "planner"],
+  "get /audit": ["owner"],
+};
+
+const allowed = (access: Access, role: Role) => access === "public" || access === "signed-in" || access.includes(role);
+
+function concretePath(path: string): string {
+  return `/api/v1${path}`
+    .replace(":token", "x".repeat(43))
+    .replace(":version", "1")
+    .replace(/:[a-zA-Z]+/g, () => randomUUID());
+}
+
+describe("access-control matrix (generated from the route table)", () => {
+  let h: Harness;
+  const agents = new Map<Role, supertest.Agent>();
+
+  beforeAll(async () => {
+    h = await startHarness();
+    const { agent: owner } = await newFirm(h, "Matrix Firm");
+    agents.set("owner", owner);
+    for (const role of ["surveyor", "planner", "client"] as const) agents.set(role, (await addMember(h, owner, role)).agent);
+  });
+  afterAll(async () => h.close());
+
+  it("has a documented entry for every route, and every entry is a route", () => {
+    const registered = Object.fromEntries(routeTable.map((r) => [`${r.method} ${r.path}`, r.access]));
+    expect(Object.keys(registered).sort()).toEqual(Object.keys(EXPECTED).sort());
+    expect(registered).toEqual(EXPECTED);
+  });
+
+  it("refuses every non-public route without a session (401)", async () => {
+    for (const route of routeTable.filter((r) => r.access !== "public")) {
+      const res = await h.request()[route.method as "get"](concretePath(route.path)).send({});
+      expect(res.status, `${route.method} ${route.path}`).toBe(401);
+    }
+  });
+
+  // Destructive routes get random ids, so an allowed role reaches the service and answers 404 or
+  // 400, never 401/403; a refused role is stopped at the door with 403.
+  it.each(ROLES)("answers the %s role as documented on every route", async (role) => {
+    const agent = agents.get(role)!;
+    for (const route of routeTable) {
+      if (route.path === "/auth/sign-out" || route.path === "/auth/password" || route.path === "/auth/refresh") continue;
+      const res = await agent[route.method as "get"](concretePath(route.path)).send({});
+      const label = `${role} ${route.method} ${route.path} → ${res.status} ${JSON.stringify(res.body).slice(0, 120)}`;
+      expect(res.status, label).toBeLessThan(500);
+      if (allowed(route.access, role)) expect([401, 403], label).not.toContain(res.status);
+      else expect(res.status, label).toBe(403);
+    }
+  });
+});

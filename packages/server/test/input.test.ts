@@ -1,0 +1,69 @@
+import type supertest from "supertest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { newFirm, startHarness, type Harness } from "./harness.js";
+
+/** Bad input on every route with a body or parameters: 400 with the field paths, never 500. */
+describe("bad input", () => {
+  let h: Harness;
+  let owner: supertest.Agent;
+  let projectId: string;
+
+  beforeAll(async () => {
+    h = await startHarness();
+    owner = (await newFirm(h)).agent;
+    projectId = (await owner.post("/api/v1/projects").send({ title: "Input checks" })).body.id;
+  });
+  afterAll(async () => h.close());
+
+  const cases: [string, string, (id: string) => string, unknown, string[]][] = [
+    ["sign-up", "post", () => "/api/v1/auth/sign-up", { firmName: "", email: "nope", password: "short" }, ["firmName", "displayName", "email", "password"]],
+    ["sign-in", "post", () => "/api/v1/auth/sign-in", { email: 42 }, ["email", "password"]],
+    ["switch firm", "post", () => "/api/v1/auth/switch-firm", { organizationId: "x" }, ["organizationId"]],
+    ["password change", "post", () => "/api/v1/auth/password", { newPassword: "x" }, ["currentPassword", "newPassword"]],
+    ["reset request", "post", () => "/api/v1/auth/password-reset/request", {}, ["email"]],
+    ["reset", "post", () => "/api/v1/auth/password-reset", { token: "abc" }, ["token", "password"]],
+    ["accept", "post", () => "/api/v1/invitations/accept", { token: 5 }, ["token", "displayName", "password"]],
+    ["invitation preview", "get", () => "/api/v1/invitations/short", undefined, ["token"]],
+    ["invite", "post", () => "/api/v1/people/invitations", { email: "x", role: "boss" }, ["email", "role"]],
+    ["revoke invite", "delete", () => "/api/v1/people/invitations/not-a-uuid", undefined, ["id"]],
+    ["change role", "patch", () => "/api/v1/people/members/not-a-uuid", { role: "boss" }, ["id"]],
+    ["remove member", "delete", () => "/api/v1/people/members/not-a-uuid", undefined, ["id"]],
+    ["create project", "post", () => "/api/v1/projects", { title: "", status: "done" }, ["title", "status"]],
+    ["get project", "get", () => "/api/v1/projects/nope", undefined, ["projectId"]],
+    ["update project", "patch", (id) => `/api/v1/projects/${id}`, { title: 3 }, ["title"]],
+    ["add client", "post", (id) => `/api/v1/projects/${id}/clients`, { membershipId: "x" }, ["membershipId"]],
+    ["remove client", "delete", (id) => `/api/v1/projects/${id}/clients/x`, undefined, ["membershipId"]],
+    ["get plan", "get", () => "/api/v1/projects/nope/plan", undefined, ["projectId"]],
+    ["save plan", "put", (id) => `/api/v1/projects/${id}/plan`, { baseVersion: -1, document: [] }, ["baseVersion", "document"]],
+    ["revisions", "get", () => "/api/v1/projects/nope/plan/revisions", undefined, ["projectId"]],
+    ["revision", "get", (id) => `/api/v1/projects/${id}/plan/revisions/abc`, undefined, ["version"]],
+    ["audit", "get", () => "/api/v1/audit?limit=0", undefined, ["limit"]],
+  ];
+
+  it.each(cases)("%s answers 400 with the field paths", async (_name, method, path, body, paths) => {
+    const req = owner[method as "get"](path(projectId));
+    const res = body === undefined ? await req : await req.send(body as object);
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe("invalid_input");
+    const got = (res.body.error.details as { path: string; message: string }[]).map((d) => d.path);
+    for (const p of paths) expect(got, JSON.stringify(res.body)).toContain(p);
+    for (const d of res.body.error.details) expect(d.message.length).toBeGreaterThan(3);
+  });
+
+  it("answers malformed JSON with 400 and a readable message", async () => {
+    const res = await owner.post("/api/v1/projects").set("content-type", "application/json").send('{"title": ');
+    expect(res.status).toBe(400);
+    expect(res.body.error.message).toMatch(/not valid JSON/);
+  });
+
+  it("answers an over-size body with 413", async () => {
+    const res = await owner.post("/api/v1/projects").send({ title: "x".repeat(300_000) });
+    expect(res.status).toBe(413);
+  });
+
+  it("answers an unknown API path with 404 in the error shape", async () => {
+    const res = await owner.get("/api/v1/nothing-here");
+    expect(res.status).toBe(404);
+    expect(res.body.error.code).toBe("not_found");
+  });
+});
