@@ -21,6 +21,7 @@ export function AuthLayout() {
 export function AuthCard({ title, description, children, footer }: { title: string; description?: ReactNode; children: ReactNode; footer?: ReactNode }) {
   return (
     <>
+      <title>{`${title} · Hushmark`}</title>
       <div className="rounded-lg border border-rule bg-panel p-6 shadow-sm sm:p-8">
         <h1 className="text-2xl font-semibold tracking-tight">{title}</h1>
         {description ? <div className="mt-1 text-[15px] text-muted">{description}</div> : null}

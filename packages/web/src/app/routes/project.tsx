@@ -55,6 +55,7 @@ export function ProjectRoute() {
   const { title, siteAddress, status } = project.data;
   return (
     <div className="flex flex-col gap-5">
+      <title>{`${title} · Hushmark`}</title>
       <div>
         <BackLink />
         <div className="flex flex-wrap items-center gap-3">

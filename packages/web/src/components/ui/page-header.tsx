@@ -3,6 +3,7 @@ import type { ReactNode } from "react";
 export function PageHeader({ title, description, actions, eyebrow }: { title: string; description?: ReactNode; actions?: ReactNode; eyebrow?: ReactNode }) {
   return (
     <header className="flex flex-wrap items-end justify-between gap-4 pb-5">
+      <title>{`${title} · Hushmark`}</title>
       <div className="min-w-0">
         {eyebrow ? <div className="mb-1 text-sm text-muted">{eyebrow}</div> : null}
         <h1 className="text-2xl font-semibold tracking-tight text-ink">{title}</h1>
