@@ -29,10 +29,11 @@ export const invitationPreviewSchema = z.object({
 });
 export type InvitationPreview = z.infer<typeof invitationPreviewSchema>;
 
+/** `displayName` is needed only when the invitee has no Hushmark account yet (the server says so with a 400 on that field). */
 export const acceptInvitationSchema = z.object({
   token: tokenSchema,
-  displayName: displayNameSchema,
-  password: passwordSchema,
+  displayName: displayNameSchema.optional(),
+  password: z.string().min(1, "Enter a password.").max(128, "Use at most 128 characters."),
 });
 export type AcceptInvitationInput = z.infer<typeof acceptInvitationSchema>;
 

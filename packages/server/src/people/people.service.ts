@@ -1,5 +1,6 @@
 import type { DataSource } from "typeorm";
 import { IsNull, MoreThan } from "typeorm";
+import { passwordSchema } from "@hushmark/schemas";
 import type { AcceptInvitationInput, Invitation as InvitationDto, InvitationPreview, InviteInput, Member, People, Role } from "@hushmark/schemas";
 import type { Actor } from "../auth/actor.js";
 import { hashPassword, verifyPassword } from "../auth/passwords.js";
@@ -126,7 +127,6 @@ export function createPeopleService(dataSource: DataSource, config: AppConfig, m
   /** Accepts an invitation: creates the user (or checks an existing user's password) and the membership. */
   async function accept(input: AcceptInvitationInput): Promise<{ userId: string; membershipId: string }> {
     const invitation = await findLive(input.token);
-    const newHash = await hashPassword(input.password, config.argon2);
     return dataSource.transaction(async (manager) => {
       const locked = await manager.getRepository(Invitation).findOne({ where: { id: invitation.id, acceptedAt: IsNull() }, lock: { mode: "pessimistic_write" } });
       if (!locked) throw new HttpError(404, "invitation_not_found", "This invitation was already used.");
@@ -137,7 +137,13 @@ export function createPeopleService(dataSource: DataSource, config: AppConfig, m
           throw new HttpError(400, "invalid_input", "Some fields need attention.", [{ path: "password", message: "You already have a Hushmark account: enter its password to join this firm." }]);
         }
       } else {
-        user = await userRepo.save({ email: invitation.email, displayName: input.displayName, passwordHash: newHash });
+        const passwordCheck = passwordSchema.safeParse(input.password);
+        const issues = [
+          ...(input.displayName ? [] : [{ path: "displayName", message: "Enter your name." }]),
+          ...(passwordCheck.success ? [] : [{ path: "password", message: passwordCheck.error.issues[0]!.message }]),
+        ];
+        if (issues.length) throw new HttpError(400, "invalid_input", "Some fields need attention.", issues);
+        user = await userRepo.save({ email: invitation.email, displayName: input.displayName!, passwordHash: await hashPassword(input.password, config.argon2) });
       }
       const membership = await manager.getRepository(Membership).save({ userId: user.id, organizationId: invitation.organizationId, role: invitation.role });
       await manager.getRepository(Invitation).update({ id: invitation.id }, { acceptedAt: new Date() });
