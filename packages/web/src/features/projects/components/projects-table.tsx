@@ -34,7 +34,7 @@ const columns = [
   column.accessor("title", {
     header: "Title",
     cell: (info) => (
-      <Link to={paths.project(info.row.original.id)} className="font-medium text-brand-strong underline-offset-2 hover:underline">
+      <Link to={paths.project(info.row.original.id)} className="-my-1 inline-flex min-h-11 items-center font-medium text-brand-strong underline-offset-2 hover:underline">
         {info.getValue()}
       </Link>
     ),
