@@ -46,9 +46,9 @@ export async function bringUpDatabase({ dir, port, database }) {
 }
 
 /** Builds the packages the running app needs, and what they depend on, through Turborepo (cached). */
-export function buildAll(root, filters = ["@hushmark/server...", "@hushmark/web...", "@hushmark/fakes..."]) {
+export function buildAll(root, filters = ["@hushmark/server...", "@hushmark/web...", "@hushmark/fakes..."], extra = []) {
   step("building (turbo run build)…");
-  run("npx", ["turbo", "run", "build", "--output-logs=errors-only", ...filters.map((f) => `--filter=${f}`)], { cwd: root, env: { ...process.env, TURBO_TELEMETRY_DISABLED: "1", DO_NOT_TRACK: "1" } });
+  run("npx", ["turbo", "run", "build", "--output-logs=errors-only", ...extra, ...filters.map((f) => `--filter=${f}`)], { cwd: root, env: { ...process.env, TURBO_TELEMETRY_DISABLED: "1", DO_NOT_TRACK: "1" } });
   done("built");
 }
 
