@@ -4,3 +4,4 @@ export * from "./auth.js";
 export * from "./people.js";
 export * from "./projects.js";
 export * from "./plans.js";
+export * from "./analyses.js";
