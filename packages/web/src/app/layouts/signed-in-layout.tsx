@@ -4,6 +4,7 @@ import { PageLoading } from "../../components/ui/spinner";
 import { Wordmark } from "../../components/ui/wordmark";
 import { paths, signInWithNext } from "../../config/paths";
 import { useMe } from "../../features/auth/api/get-me";
+import { CurrentMeContext } from "../../features/auth/components/current-me-context";
 import { FirmSwitcher } from "../../features/auth/components/firm-switcher";
 import { UserMenu } from "../../features/auth/components/user-menu";
 import { isApiError } from "../../lib/api-client";
@@ -32,6 +33,7 @@ export function SignedInLayout() {
 
   const { role } = me.data.membership;
   return (
+    <CurrentMeContext value={me.data}>
     <div className="flex min-h-screen flex-col">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-30 focus:rounded focus:bg-panel focus:px-3 focus:py-2">
         Skip to content
@@ -62,5 +64,6 @@ export function SignedInLayout() {
         <Outlet />
       </main>
     </div>
+    </CurrentMeContext>
   );
 }

@@ -3,7 +3,7 @@ import { EmptyState } from "../../components/ui/empty-state";
 import { ErrorState } from "../../components/ui/error-state";
 import { PageHeader } from "../../components/ui/page-header";
 import { Skeleton } from "../../components/ui/spinner";
-import { useCurrentMe } from "../../features/auth/api/get-me";
+import { useCurrentMe } from "../../features/auth/components/use-current-me";
 import { usePeople } from "../../features/people/api/get-people";
 import { InvitationsList } from "../../features/people/components/invitations-list";
 import { InviteForm } from "../../features/people/components/invite-form";

@@ -1,6 +1,6 @@
 import { useParams } from "react-router-dom";
 import { EmptyState } from "../../components/ui/empty-state";
-import { useCurrentMe } from "../../features/auth/api/get-me";
+import { useCurrentMe } from "../../features/auth/components/use-current-me";
 import { PlanSummary } from "../../features/projects/components/plan-summary";
 import { SectionPlaceholder } from "../../features/projects/components/section-placeholder";
 import type { ProjectSection } from "../../features/projects/components/sections";

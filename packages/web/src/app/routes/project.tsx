@@ -4,7 +4,7 @@ import { EmptyState } from "../../components/ui/empty-state";
 import { ErrorState } from "../../components/ui/error-state";
 import { Skeleton } from "../../components/ui/spinner";
 import { paths } from "../../config/paths";
-import { useCurrentMe } from "../../features/auth/api/get-me";
+import { useCurrentMe } from "../../features/auth/components/use-current-me";
 import { useProject } from "../../features/projects/api/get-project";
 import { ProjectStatusBadge } from "../../features/projects/components/project-status-badge";
 import { SectionTabs } from "../../features/projects/components/section-tabs";

@@ -7,7 +7,7 @@ import { ErrorState } from "../../components/ui/error-state";
 import { PageHeader } from "../../components/ui/page-header";
 import { Skeleton } from "../../components/ui/spinner";
 import { paths } from "../../config/paths";
-import { useCurrentMe } from "../../features/auth/api/get-me";
+import { useCurrentMe } from "../../features/auth/components/use-current-me";
 import { useProjects } from "../../features/projects/api/get-projects";
 import { NewProjectDialog } from "../../features/projects/components/new-project-dialog";
 import { ProjectsTable } from "../../features/projects/components/projects-table";

@@ -18,9 +18,3 @@ export function useMe() {
   return useQuery(meQueryOptions());
 }
 
-/** The signed-in person, for screens behind the sign-in guard (which waits for it). */
-export function useCurrentMe(): Me {
-  const { data } = useMe();
-  if (!data) throw new Error("useCurrentMe was used outside the signed-in part of the app.");
-  return data;
-}

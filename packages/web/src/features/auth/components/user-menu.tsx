@@ -19,7 +19,7 @@ export function UserMenu({ me }: { me: Me }) {
   const menuId = useId();
   const wrapper = useRef<HTMLDivElement>(null);
   const navigate = useNavigate();
-  const signOut = useSignOut();
+  const signOut = useSignOut({ leave: () => navigate(paths.signIn, { replace: true }) });
 
   useEffect(() => {
     if (!open) return;
@@ -41,7 +41,6 @@ export function UserMenu({ me }: { me: Me }) {
     signOut.mutate(undefined, {
       onSuccess: () => toast.success("Signed out."),
       onError: () => toast.error("We could not reach the server, but this device has forgotten your session."),
-      onSettled: () => navigate(paths.signIn, { replace: true }),
     });
   };
 
