@@ -1,1 +1,74 @@
-export {};
+/** Public API of @hushmark/floorplan: the plan document, planar geometry, validation, catalogue and the plan → network builder. */
+
+// Document
+export {
+  PLAN_FORMAT, PLAN_SCHEMA_VERSION, planSchema, elementSchema, levelSchema, roomSchema, wallSchema,
+  doorSchema, windowSchema, penetrationSchema, ventSchema, ductSchema, voidSchema, neighbourSchema,
+  pinSchema, noteSchema, finishSchema, targetSchema, leaksSchema, facesSchema, wallSettingSchema,
+  planDefaultsSchema, pointSchema, vertexSchema, roomUseSchema,
+} from "./document/schema.js";
+export type {
+  Plan, PlanInput, PlanDefaults, Element, ElementType, ElementOf, Level, Room, FreeWall, Door, Window,
+  Penetration, Opening, Vent, Duct, Void, Neighbour, Pin, Note, Finish, Target, Leaks, Faces,
+  WallSetting, Point, Vertex, RoomUse,
+} from "./document/schema.js";
+export { OUTDOORS_ID, elementIdSchema, edgeRef, edgeRefParts } from "./document/ids.js";
+export { migratePlan, migrationsApplied, planMigrations, PlanMigrationError } from "./document/migrate.js";
+export type { PlanMigration } from "./document/migrate.js";
+export { parsePlan } from "./document/parse.js";
+export type { PlanParseResult } from "./document/parse.js";
+export { serializePlan, canonicalJson } from "./document/serialize.js";
+export { elementsOfType, elementOfType, levelsByElevation } from "./document/elements.js";
+export { formatLength, formatArea } from "./document/units.js";
+
+// Geometry (planar, metres)
+export {
+  polygonAreaM2, polygonSignedAreaM2, polygonPerimeterM, polygonCentroid, polygonSelfIntersections,
+  pointInPolygon, roomVolumeM3, distanceM, boundsM, segmentsIntersect,
+} from "./geometry/polygon.js";
+export { collinearOverlap, pointAlong, distanceToLineM, projectionAlongM } from "./geometry/segments.js";
+export type { SegmentOverlap } from "./geometry/segments.js";
+export { wallPieces, planWallPieces, sharedWalls, roomEdges } from "./geometry/walls.js";
+export type { WallPiece, WallSide, RoomEdge } from "./geometry/walls.js";
+export { wallJunctions, armsInline } from "./geometry/junctions.js";
+export type { Junction, JunctionArm } from "./geometry/junctions.js";
+export { polygonOverlapM2 } from "./geometry/overlap.js";
+export { polygonIsConvex, convexClipAreaM2 } from "./geometry/clip.js";
+export { stackedRooms, roomsCoveredByVoid, roomsAboveVoid, MIN_OVERLAP_M2 } from "./geometry/stacking.js";
+export type { StackedPair } from "./geometry/stacking.js";
+export { openingPlacement } from "./geometry/openings.js";
+export type { OpeningPlacement } from "./geometry/openings.js";
+
+// Validation
+export { validatePlan, planIsAnalysable } from "./validation/validate.js";
+export { PROBLEM_CODES } from "./validation/codes.js";
+export type { ProblemCode } from "./validation/codes.js";
+export type { Problem } from "./validation/problem.js";
+
+// Catalogue and source library
+export { constructionCatalogue } from "./catalogue/catalogue.js";
+export { catalogueWith } from "./catalogue/types.js";
+export type { Catalogue, Construction, ConstructionCategory, Covering, Silencer, SourceNote } from "./catalogue/types.js";
+export { sourceLibrary, sourceSpectrum } from "./catalogue/sources.js";
+export type { SourceSpectrum } from "./catalogue/sources.js";
+export { finishPresets, finishPreset, ASSUMED_RT60_S } from "./catalogue/finishes.js";
+export type { FinishPreset } from "./catalogue/finishes.js";
+export { BANDS_HZ, thirdOctavesFromOctaves } from "./catalogue/bands.js";
+
+// Builder and result mapping
+export { buildNetwork } from "./builder/build-network.js";
+export type { BuildOptions, BuildResult, LinkTrace, SpaceTrace } from "./builder/types.js";
+export { leakAreasM2, CRACKED_SEAL_GAP_MM } from "./builder/wall-parts.js";
+export { ductAttenuationParts, endReflectionDb, LINED_DUCT_DB_PER_M, BARE_DUCT_DB_PER_M, BEND_DB } from "./builder/ducts.js";
+export { NEIGHBOUR_DEFAULTS } from "./builder/spaces.js";
+export { mapResultToPlan } from "./result/map-result.js";
+export type { ElementResult, PathOnPlan, PathStep, PathPoint, PlanResult, SolveResultLike } from "./result/types.js";
+
+// Demo plans and synthetic buildings
+export { demoPlans } from "./demo/demo-plans.js";
+export type { DemoPlan } from "./demo/demo-plans.js";
+export { fernhollowStudioPlan } from "./demo/fernhollow-studio.js";
+export { cinemaUnderNurseryPlan } from "./demo/cinema-under-nursery.js";
+export { generateSyntheticBuilding } from "./synthetic/generate.js";
+export type { SyntheticOptions } from "./synthetic/generate.js";
+export { seededRandom } from "./synthetic/random.js";

@@ -22,7 +22,7 @@ export function buildContext(plan: Plan, catalogue: Catalogue, pieces: WallPiece
     pieces,
     levels: levelsByElevation(plan),
     rooms: new Map(elementsOfType(plan, "room").map((r) => [r.id, r])),
-    freeWalls: elementsOfType(plan, "wall"),
+    freeWalls: [...elementsOfType(plan, "wall")],
   };
 }
 

@@ -19,19 +19,20 @@ function floorLink(ctx: BuildContext, upper: Room, lowerId: string, areaM2: numb
     ...(c.impactLnDb ? { impact: { ln_db: [...c.impactLnDb], ...(covering ? { delta_l_db: [...covering.deltaLDb] } : {}) } } : {}),
     ...(c.source.kind === "estimate" ? { estimate: true } : {}),
   };
-  return { link, trace: { linkId, kind: "floor", refs: [upper.id, lowerId], levelId, polyline: [centre], spaces: [upper.id, lowerId] } };
+  return { link, trace: { linkId, kind: "floor", refs: [ref, upper.id, lowerId], levelId, polyline: [centre], spaces: [upper.id, lowerId] } };
 }
 
 function ceilingLink(ctx: BuildContext, v: Void, room: Room, areaM2: number): { link: LinkInput; trace: LinkTrace } {
   const c = constructionOf(ctx, room.ceiling?.constructionId ?? ctx.plan.defaults.ceilingConstructionId);
   const above = v.kind !== "crawlspace";
-  const linkId = `ceiling:${v.id}^${room.id}`;
+  const ref = above ? `${v.id}^${room.id}` : `${room.id}^${v.id}`;
+  const linkId = `ceiling:${ref}`;
   const between: [string, string] = above ? [v.id, room.id] : [room.id, v.id];
   const link: LinkInput = {
-    id: linkId, type: "floor", between, ref: room.id, name: above ? `Ceiling of ${room.name} to ${v.name}` : `Floor of ${room.name} over ${v.name}`,
+    id: linkId, type: "floor", between, ref, name: above ? `Ceiling of ${room.name} to ${v.name}` : `Floor of ${room.name} over ${v.name}`,
     area_m2: areaM2, tl_db: [...c.tlDb], ...(c.source.kind === "estimate" ? { estimate: true } : {}),
   };
-  return { link, trace: { linkId, kind: "ceiling", refs: [room.id, v.id], levelId: room.levelId, polyline: [polygonCentroid(room.outline)], spaces: between } };
+  return { link, trace: { linkId, kind: "ceiling", refs: [ref, room.id, v.id], levelId: room.levelId, polyline: [polygonCentroid(room.outline)], spaces: between } };
 }
 
 /**

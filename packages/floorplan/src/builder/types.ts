@@ -13,6 +13,8 @@ export interface LinkTrace {
   polyline: Point[];
   /** The two spaces' plan ids. */
   spaces: [string, string];
+  /** Where each element of the link sits (wall piece midpoint, opening centre), m. */
+  points?: Record<string, Point>;
 }
 
 /** Where a network space sits on the plan. */

@@ -1,7 +1,7 @@
 import type { Part } from "@hushmark/acoustics";
 import { elementsOfType } from "../document/elements.js";
 import { OUTDOORS_ID } from "../document/ids.js";
-import type { Opening } from "../document/schema.js";
+import type { Opening, Point } from "../document/schema.js";
 import { openingPlacement } from "../geometry/openings.js";
 import { collinearOverlap } from "../geometry/segments.js";
 import type { WallPiece } from "../geometry/walls.js";
@@ -11,8 +11,8 @@ import { openingParts, tlPart } from "./wall-parts.js";
 
 
 /** Openings grouped by the wall piece they sit on (free-wall openings go to the piece under them). */
-export function openingsByPiece(ctx: BuildContext): Map<string, Opening[]> {
-  const out = new Map<string, Opening[]>();
+export function openingsByPiece(ctx: BuildContext): Map<string, Array<{ opening: Opening; centre: Point }>> {
+  const out = new Map<string, Array<{ opening: Opening; centre: Point }>>();
   const tol = ctx.plan.defaults.wallToleranceM;
   const all: Opening[] = [...elementsOfType(ctx.plan, "door"), ...elementsOfType(ctx.plan, "window"), ...elementsOfType(ctx.plan, "penetration")];
   for (const o of all) {
@@ -25,7 +25,7 @@ export function openingsByPiece(ctx: BuildContext): Map<string, Opening[]> {
     }
     if (!hostId) continue;
     const list = out.get(hostId) ?? [];
-    list.push(o);
+    list.push({ opening: o, centre: { x: (place.start.x + place.end.x) / 2, y: (place.start.y + place.end.y) / 2 } });
     out.set(hostId, list);
   }
   return out;
@@ -53,7 +53,9 @@ export function buildWallLinks(ctx: BuildContext): { links: LinkInput[]; traces:
     const openings = byPiece.get(piece.id) ?? [];
     const parts: Part[] = [];
     let holesM2 = 0;
-    for (const o of openings) {
+    const points: Record<string, Point> = { [piece.id]: { x: (piece.start.x + piece.end.x) / 2, y: (piece.start.y + piece.end.y) / 2 } };
+    for (const { opening: o, centre } of openings) {
+      points[o.id] = centre;
       const c = o.type === "penetration" ? undefined : ctx.catalogue.constructions[o.constructionId];
       const op = openingParts(o, c);
       parts.push(...op.parts);
@@ -65,8 +67,8 @@ export function buildWallLinks(ctx: BuildContext): { links: LinkInput[]; traces:
     const linkId = `wall:${piece.id}`;
     links.push({ id: linkId, type: "partition", between: [a, b], ref: piece.id, name: `Wall between ${spaceName(ctx, a)} and ${spaceName(ctx, b)}`, parts, length_m: piece.lengthM });
     traces.push({
-      linkId, kind: piece.kind === "shared" ? "wall" : "exterior-wall", refs: [piece.id, ...openings.map((o) => o.id)],
-      levelId: piece.levelId, polyline: [piece.start, piece.end], spaces: [a, b],
+      linkId, kind: piece.kind === "shared" ? "wall" : "exterior-wall", refs: [piece.id, ...openings.map((o) => o.opening.id)],
+      levelId: piece.levelId, polyline: [piece.start, piece.end], spaces: [a, b], points,
     });
   }
   return { links, traces };

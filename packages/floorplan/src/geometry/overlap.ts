@@ -1,5 +1,6 @@
 import { featureCollection, intersect, polygon } from "@turf/turf";
 import type { Point } from "../document/schema.js";
+import { convexClipAreaM2, polygonIsConvex } from "./clip.js";
 import { boundsM, polygonAreaM2 } from "./polygon.js";
 
 function ring(points: readonly Point[]): number[][] {
@@ -15,13 +16,21 @@ function ringAreaM2(coords: number[][]): number {
 }
 
 /**
- * Area where two plan polygons overlap, m²: turf's intersection for the boolean part (it works
- * on plane coordinates), the area planar (holes subtracted).
+ * Area where two plan polygons overlap, m²: exact convex clipping when either is convex (most
+ * rooms), otherwise turf's intersection for the boolean part (it works on plane coordinates)
+ * with the area planar (holes subtracted).
  */
 export function polygonOverlapM2(a: readonly Point[], b: readonly Point[]): number {
   if (a.length < 3 || b.length < 3) return 0;
   const ba = boundsM(a), bb = boundsM(b);
   if (ba.maxX <= bb.minX || bb.maxX <= ba.minX || ba.maxY <= bb.minY || bb.maxY <= ba.minY) return 0;
+  if (polygonIsConvex(b)) return convexClipAreaM2(a, b);
+  if (polygonIsConvex(a)) return convexClipAreaM2(b, a);
+  return turfOverlapM2(a, b);
+}
+
+/** Overlap area by turf's polygon intersection, the area planar, m². */
+export function turfOverlapM2(a: readonly Point[], b: readonly Point[]): number {
   let result;
   try {
     result = intersect(featureCollection([polygon([ring(a)]), polygon([ring(b)])]));

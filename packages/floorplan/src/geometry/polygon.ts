@@ -34,8 +34,25 @@ export function roomVolumeM3(areaM2: number, heightM: number): number {
   return areaM2 * heightM;
 }
 
-/** Axis-aligned bounds of a point list, m. */
-export function boundsM(points: readonly Point[]): { minX: number; minY: number; maxX: number; maxY: number } {
+export interface Bounds {
+  minX: number;
+  minY: number;
+  maxX: number;
+  maxY: number;
+}
+
+const boundsCache = new WeakMap<readonly Point[], Bounds>();
+
+/** Axis-aligned bounds of a point list, m (cached per outline array; treat outlines as immutable). */
+export function boundsM(points: readonly Point[]): Bounds {
+  const hit = boundsCache.get(points);
+  if (hit) return hit;
+  const b = computedBounds(points);
+  boundsCache.set(points, b);
+  return b;
+}
+
+function computedBounds(points: readonly Point[]): Bounds {
   let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
   for (const p of points) {
     if (p.x < minX) minX = p.x;

@@ -1,7 +1,6 @@
 import { edgeRef } from "../document/ids.js";
 import { elementsOfType } from "../document/elements.js";
 import type { Plan, Point, Room } from "../document/schema.js";
-import { boundsM } from "./polygon.js";
 import { collinearOverlap, pointAlong, uncoveredIntervals } from "./segments.js";
 
 /** One edge of a room outline, from vertex `vertexId` to the next vertex. */
@@ -38,8 +37,12 @@ export interface WallPiece {
   sides: WallSide[];
 }
 
-/** The edges of a room outline, skipping zero-length ones, m. */
+const edgesCache = new WeakMap<Room, RoomEdge[]>();
+
+/** The edges of a room outline, skipping zero-length ones, m (cached per room object). */
 export function roomEdges(room: Room): RoomEdge[] {
+  const hit = edgesCache.get(room);
+  if (hit) return hit;
   const out: RoomEdge[] = [];
   const n = room.outline.length;
   for (let i = 0; i < n; i++) {
@@ -57,15 +60,57 @@ export function roomEdges(room: Room): RoomEdge[] {
       lengthM,
     });
   }
+  edgesCache.set(room, out);
   return out;
 }
 
-interface IndexedEdge {
-  edge: RoomEdge;
-  minX: number;
-  maxX: number;
-  minY: number;
-  maxY: number;
+/** Angle buckets of about 0.6°; edges further apart in direction are never one wall. */
+const ANGLE_STEP = 0.01;
+
+/**
+ * Pairs of edges that may lie on one line: bucketed by direction and by offset of their line
+ * from the origin (neighbouring buckets included), so only near-collinear edges are compared.
+ */
+function candidatePairs(edges: readonly RoomEdge[], toleranceM: number): Array<[RoomEdge, RoomEdge]> {
+  const cell = Math.max(toleranceM, 1e-6) * 2;
+  const buckets = new Map<string, number[]>();
+  const keys = edges.map((e) => {
+    let ux = (e.end.x - e.start.x) / e.lengthM, uy = (e.end.y - e.start.y) / e.lengthM;
+    if (uy < 0 || (uy === 0 && ux < 0)) [ux, uy] = [-ux, -uy];
+    const angle = Math.atan2(uy, ux); // 0 ≤ angle < π
+    const a = Math.round(angle / ANGLE_STEP) % Math.round(Math.PI / ANGLE_STEP);
+    const offset = -uy * e.start.x + ux * e.start.y;
+    return { a, o: Math.floor(offset / cell) };
+  });
+  keys.forEach(({ a, o }, i) => {
+    const key = `${a},${o}`;
+    const list = buckets.get(key) ?? [];
+    list.push(i);
+    buckets.set(key, list);
+  });
+  const pairs: Array<[RoomEdge, RoomEdge]> = [];
+  const seen = new Set<number>();
+  const n = edges.length;
+  keys.forEach(({ a, o }, i) => {
+    const steps = Math.round(Math.PI / ANGLE_STEP);
+    for (const da of [-1, 0, 1]) {
+      // Directions wrap at π, where the line offset changes sign.
+      let aa = a + da, flip = 1;
+      if (aa < 0) { aa += steps; flip = -1; }
+      if (aa >= steps) { aa -= steps; flip = -1; }
+      for (const d0 of [-1, 0, 1]) {
+        const oo = flip === 1 ? o + d0 : -o - 1 + d0;
+        for (const j of buckets.get(`${aa},${oo}`) ?? []) {
+          if (j <= i) continue;
+          const id = i * n + j;
+          if (seen.has(id)) continue;
+          seen.add(id);
+          pairs.push([edges[i]!, edges[j]!]);
+        }
+      }
+    }
+  });
+  return pairs;
 }
 
 /**
@@ -74,12 +119,11 @@ interface IndexedEdge {
  * unshared rest (m).
  */
 export function wallPieces(rooms: readonly Room[], toleranceM: number): WallPiece[] {
-  const byLevel = new Map<string, IndexedEdge[]>();
+  const byLevel = new Map<string, RoomEdge[]>();
   for (const room of [...rooms].sort((a, b) => (a.id < b.id ? -1 : 1))) {
     for (const edge of roomEdges(room)) {
-      const b = boundsM([edge.start, edge.end]);
       const list = byLevel.get(edge.levelId) ?? [];
-      list.push({ edge, ...b });
+      list.push(edge);
       byLevel.set(edge.levelId, list);
     }
   }
@@ -87,39 +131,30 @@ export function wallPieces(rooms: readonly Room[], toleranceM: number): WallPiec
   for (const levelId of [...byLevel.keys()].sort()) {
     const edges = byLevel.get(levelId)!;
     const covered = new Map<string, Array<[number, number]>>();
-    const sweep = [...edges].sort((p, q) => p.minX - q.minX);
-    for (let i = 0; i < sweep.length; i++) {
-      const p = sweep[i]!;
-      for (let j = i + 1; j < sweep.length; j++) {
-        const q = sweep[j]!;
-        if (q.minX > p.maxX + toleranceM) break;
-        if (q.edge.roomId === p.edge.roomId) continue;
-        if (q.minY > p.maxY + toleranceM || q.maxY < p.minY - toleranceM) continue;
-        const [a, b] = p.edge.ref < q.edge.ref ? [p.edge, q.edge] : [q.edge, p.edge];
-        const ov = collinearOverlap(a.start, a.end, b.start, b.end, toleranceM);
-        if (!ov) continue;
-        const start = pointAlong(a.start, a.end, ov.aFromM);
-        const end = pointAlong(a.start, a.end, ov.aToM);
-        pieces.push({
-          id: `${a.ref}|${b.ref}`,
-          levelId,
-          kind: "shared",
-          start,
-          end,
-          lengthM: ov.lengthM,
-          sides: [
-            { roomId: a.roomId, edgeRef: a.ref, fromM: ov.aFromM, toM: ov.aToM },
-            { roomId: b.roomId, edgeRef: b.ref, fromM: ov.bFromM, toM: ov.bToM },
-          ],
-        });
-        for (const [e, from, to] of [[a, ov.aFromM, ov.aToM], [b, ov.bFromM, ov.bToM]] as const) {
-          const list = covered.get(e.ref) ?? [];
-          list.push([from, to]);
-          covered.set(e.ref, list);
-        }
+    for (const [p, q] of candidatePairs(edges, toleranceM)) {
+      if (q.roomId === p.roomId) continue;
+      const [a, b] = p.ref < q.ref ? [p, q] : [q, p];
+      const ov = collinearOverlap(a.start, a.end, b.start, b.end, toleranceM);
+      if (!ov) continue;
+      pieces.push({
+        id: `${a.ref}|${b.ref}`,
+        levelId,
+        kind: "shared",
+        start: pointAlong(a.start, a.end, ov.aFromM),
+        end: pointAlong(a.start, a.end, ov.aToM),
+        lengthM: ov.lengthM,
+        sides: [
+          { roomId: a.roomId, edgeRef: a.ref, fromM: ov.aFromM, toM: ov.aToM },
+          { roomId: b.roomId, edgeRef: b.ref, fromM: ov.bFromM, toM: ov.bToM },
+        ],
+      });
+      for (const [e, from, to] of [[a, ov.aFromM, ov.aToM], [b, ov.bFromM, ov.bToM]] as const) {
+        const list = covered.get(e.ref) ?? [];
+        list.push([from, to]);
+        covered.set(e.ref, list);
       }
     }
-    for (const { edge } of edges) {
+    for (const edge of edges) {
       const free = uncoveredIntervals(edge.lengthM, covered.get(edge.ref) ?? [], toleranceM);
       free.forEach(([from, to], k) => {
         pieces.push({
