@@ -11,7 +11,7 @@ import { useSwitchFirm } from "../api/switch-firm";
 export function FirmSwitcher({ me }: { me: Me }) {
   const id = useId();
   const navigate = useNavigate();
-  const switchFirm = useSwitchFirm();
+  const switchFirm = useSwitchFirm({ leave: () => navigate(paths.projects) });
 
   if (me.memberships.length < 2) {
     return <span className="truncate text-sm font-medium text-muted">{me.membership.organizationName}</span>;
@@ -29,10 +29,7 @@ export function FirmSwitcher({ me }: { me: Me }) {
         onChange={(event) => {
           const organizationId = event.target.value;
           switchFirm.mutate(organizationId, {
-            onSuccess: (next) => {
-              toast.success(`Now working in ${next.membership.organizationName}.`);
-              navigate(paths.projects);
-            },
+            onSuccess: (next) => toast.success(`Now working in ${next.membership.organizationName}.`),
             onError: (error) => toast.error(isApiError(error) ? error.message : "We could not switch firms."),
           });
         }}
