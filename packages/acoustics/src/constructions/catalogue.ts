@@ -66,11 +66,15 @@ function interpolateLogF(xsHz: readonly number[], ys: readonly number[], atHz: n
   return y0 + ((y1 - y0) * (x - x0)) / (x1 - x0);
 }
 
-/** TL values shaped like the STC contour at `stc`, 50–5000 Hz (contour slope continued below 125 Hz, flat above 4000 Hz). */
+/**
+ * TL values shaped like the STC contour that rate exactly `stc`, 50–5000 Hz: the contour placed
+ * 2 dB lower (16 bands × 2 dB = the 32 dB allowance), its slope continued below 125 Hz, flat
+ * above 4000 Hz.
+ */
 export function stcShapedThirdOctaveTl(stc: number): number[] {
-  const core = STC_CONTOUR_DB.map((c) => stc + c);
-  const low = [core[0]! - 9, core[0]! - 6, core[0]! - 3];
-  return [...low, ...core, core[15]!, core[15]!].map((v) => Math.max(0, v));
+  const core = STC_CONTOUR_DB.map((c) => stc - 2 + c);
+  const low = [core[0]! - 12, core[0]! - 9, core[0]! - 6, core[0]! - 3];
+  return [...low, ...core, core[15]!].map((v) => Math.max(0, v));
 }
 
 /** A catalogue entry's TL in the requested band set (dB). */

@@ -12,6 +12,11 @@ export class NetworkRequestError extends Error {
   override readonly name = "NetworkRequestError";
 }
 
+/** Thrown when the power balance has no steady state or the solver does not converge. */
+export class NetworkSolveError extends Error {
+  override readonly name = "NetworkSolveError";
+}
+
 /** Where a path starts: an airborne source space, or the space below an impacted floor. */
 export interface PathStart {
   readonly kind: "airborne" | "impact";

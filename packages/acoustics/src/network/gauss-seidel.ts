@@ -19,6 +19,8 @@ export interface SolveOptions {
 export interface SolveStats {
   readonly sweeps: number;
   readonly converged: boolean;
+  /** True when energies grew without bound (the balance has no steady state). */
+  readonly diverged: boolean;
   /** Estimated largest remaining relative error. */
   readonly errorEstimate: number;
 }
@@ -72,6 +74,36 @@ function largestExcitation(c: CompiledNetwork, p: EnergyProblem): number {
   return max;
 }
 
+function maxEnergy(e: Float64Array, order: Int32Array, B: number): number {
+  let max = 0;
+  for (let t = 0; t < order.length; t++) {
+    const jb = order[t]! * B;
+    for (let b = 0; b < B; b++) if (!(e[jb + b]! <= max)) max = e[jb + b]!;
+  }
+  return max;
+}
+
+/**
+ * Spaces whose absorption area is smaller than the transmitting area leaving them in some band:
+ * the absorption is taken to include what leaves through the boundaries, so such a space gives
+ * away more than it absorbs and the balance may have no steady state.
+ */
+export function overTransmittingSpaces(c: CompiledNetwork): { space: number; band: number; ratio: number }[] {
+  const out: { space: number; band: number; ratio: number }[] = [];
+  for (let j = 0; j < c.n; j++) {
+    if (c.outdoors[j]) continue;
+    let worst = { band: -1, ratio: 1 };
+    for (let b = 0; b < c.B; b++) {
+      let sum = 0;
+      for (let k = c.adjStart[j]!; k < c.adjStart[j + 1]!; k++) sum += c.weight[c.adjLink[k]! * c.B + b]!;
+      const ratio = sum / c.absorption[j * c.B + b]!;
+      if (ratio > worst.ratio) worst = { band: b, ratio };
+    }
+    if (worst.band >= 0) out.push({ space: j, ...worst });
+  }
+  return out;
+}
+
 /** Update space j from its neighbours; returns its largest relative change. */
 function relax(c: CompiledNetwork, p: EnergyProblem, e: Float64Array, j: number, acc: Float64Array, floor: number): number {
   const B = c.B;
@@ -102,7 +134,7 @@ export function solveEnergies(
   options: SolveOptions = {},
 ): { energy: Float64Array; stats: SolveStats } {
   const tol = options.tolerance ?? 1e-10;
-  const maxSweeps = options.maxSweeps ?? 20000;
+  const maxSweeps = options.maxSweeps ?? 5000;
   const { n, B } = c;
   const e = options.initial ? Float64Array.from(options.initial) : new Float64Array(n * B);
   for (let j = 0; j < n; j++) {
@@ -110,7 +142,10 @@ export function solveEnergies(
   }
   const order = sweepOrder(c, p);
   // Energies this far below the strongest excitation (250 dB) do not affect any result.
-  const floor = largestExcitation(c, p) * 1e-25;
+  const largest = largestExcitation(c, p);
+  const floor = largest * 1e-25;
+  // 300 dB above the strongest excitation: no physical steady state gets there.
+  const ceiling = largest * 1e30;
   const acc = new Float64Array(B);
   let previous = Infinity;
   let errorEstimate = Infinity;
@@ -122,10 +157,13 @@ export function solveEnergies(
       const d = relax(c, p, e, j, acc, floor);
       if (d > change) change = d;
     }
+    if (!(maxEnergy(e, order, c.B) <= ceiling)) {
+      return { energy: e, stats: { sweeps: sweep, converged: false, diverged: true, errorEstimate: Infinity } };
+    }
     const rate = previous > 0 && Number.isFinite(previous) ? Math.min(change / previous, 0.999) : 0.999;
     errorEstimate = change === 0 ? 0 : (change * rate) / (1 - rate);
-    if (change <= tol && errorEstimate <= tol) return { energy: e, stats: { sweeps: sweep, converged: true, errorEstimate } };
+    if (change <= tol && errorEstimate <= tol) return { energy: e, stats: { sweeps: sweep, converged: true, diverged: false, errorEstimate } };
     previous = change;
   }
-  return { energy: e, stats: { sweeps: maxSweeps, converged: false, errorEstimate } };
+  return { energy: e, stats: { sweeps: maxSweeps, converged: false, diverged: false, errorEstimate } };
 }

@@ -9,8 +9,8 @@ import { aWeightedLevelDb, aWeightsLinear } from "../bands/weighting.js";
 import { bandSet, type BandSetId } from "../bands/bands.js";
 import { ratingNc, type NcRating } from "../ratings/nc.js";
 import { compileNetwork, type CompiledNetwork } from "./compile.js";
-import { buildExcitation, receiverIndex, selectSources, type Excitation } from "./excitation.js";
-import { solveEnergies, type SolveStats } from "./gauss-seidel.js";
+import { buildExcitation, NetworkSolveError, receiverIndex, selectSources, type Excitation } from "./excitation.js";
+import { overTransmittingSpaces, solveEnergies, type SolveStats } from "./gauss-seidel.js";
 import { PerturbationEvaluator, type BaseSolution } from "./perturb.js";
 import { strongestPaths } from "./paths.js";
 import { linkShares, receiverEnergyIfPerfect } from "./shares.js";
@@ -66,6 +66,7 @@ export interface SolveResult {
   /** Every link, largest share first. */
   readonly links: readonly LinkResult[];
   readonly shortfall?: Shortfall;
+  readonly warnings: readonly string[];
   readonly solver: { readonly forward: SolveStats; readonly adjoint: SolveStats; readonly pathExpansions: number };
 }
 
@@ -88,8 +89,25 @@ export function solveBase(c: CompiledNetwork, request: { source?: string; receiv
   const unit = new Float64Array(c.n * c.B);
   unit.fill(1, receiver * c.B, receiver * c.B + c.B);
   const adj = solveEnergies(c, { fixed: ex.fixed, fixedEnergy: new Float64Array(c.n * c.B), injection: unit }, { tolerance });
+  if (!fwd.stats.converged || !adj.stats.converged) throw new NetworkSolveError(notConverged(c, fwd.stats));
   const base: BaseSolution = { c, ex, e: fwd.energy, z: adj.energy, receiver };
   return { c, ex, base, aWeights: aWeightsLinear(c.bands), forward: fwd.stats, adjoint: adj.stats };
+}
+
+function notConverged(c: CompiledNetwork, stats: SolveStats): string {
+  const over = overTransmittingSpaces(c).map(
+    (o) => `"${c.spaceIds[o.space]}" (${bandSet(c.bands).nominalHz[o.band]} Hz: its links transmit ${o.ratio.toFixed(2)}× its absorption area)`,
+  );
+  const why = stats.diverged ? "the power balance has no steady state" : `the solver did not converge in ${stats.sweeps} sweeps`;
+  const hint = over.length > 0 ? `; these spaces give away more sound than they absorb: ${over.join(", ")} — their absorption_m2/rt60_s must include what leaves through their links` : "";
+  return why + hint;
+}
+
+/** Warnings about the network that do not stop the solve. */
+export function networkWarnings(c: CompiledNetwork): string[] {
+  return overTransmittingSpaces(c).map(
+    (o) => `space "${c.spaceIds[o.space]}": its links transmit ${o.ratio.toFixed(2)}× its absorption area at ${bandSet(c.bands).nominalHz[o.band]} Hz (absorption should include what leaves through the links)`,
+  );
 }
 
 function levelsOf(e: Float64Array, from: number, B: number): number[] {
@@ -164,6 +182,7 @@ export function solveNetwork(network: Network, request: SolveRequest): SolveResu
       };
     }),
     ...(request.target ? { shortfall: shortfall(request.target, levels, dba) } : {}),
+    warnings: networkWarnings(c),
     solver: { forward: s.forward, adjoint: s.adjoint, pathExpansions: found.expansions },
   };
 }
