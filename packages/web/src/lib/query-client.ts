@@ -11,9 +11,8 @@ export function createQueryClient(config: QueryClientConfig = {}): QueryClient {
   return new QueryClient({
     ...config,
     defaultOptions: {
-      queries: { staleTime: 30_000, retry: shouldRetry, refetchOnWindowFocus: true },
-      mutations: { retry: false },
-      ...config.defaultOptions,
+      queries: { staleTime: 30_000, retry: shouldRetry, refetchOnWindowFocus: true, ...config.defaultOptions?.queries },
+      mutations: { retry: false, ...config.defaultOptions?.mutations },
     },
   });
 }

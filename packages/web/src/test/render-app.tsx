@@ -1,12 +1,11 @@
 import { render } from "@testing-library/react";
 import { createMemoryRouter, RouterProvider } from "react-router-dom";
-import { AppProvider } from "../app/provider";
+import { AppProvider, createAppQueryClient } from "../app/provider";
 import { routes } from "../app/router";
-import { createQueryClient } from "../lib/query-client";
 
 /** The whole app at one address, with a fresh cache. */
 export function renderApp(route: string) {
-  const queryClient = createQueryClient({ defaultOptions: { queries: { retry: false } } });
+  const queryClient = createAppQueryClient({ retry: false });
   const router = createMemoryRouter(routes, { initialEntries: [route] });
   const view = render(
     <AppProvider queryClient={queryClient}>

@@ -1,12 +1,11 @@
 import { render } from "@testing-library/react";
 import type { ReactElement } from "react";
 import { createMemoryRouter, RouterProvider } from "react-router-dom";
-import { AppProvider } from "../app/provider";
-import { createQueryClient } from "../lib/query-client";
+import { AppProvider, createAppQueryClient } from "../app/provider";
 
 /** Renders a screen with a fresh query cache and a memory router, as the app would. */
 export function renderWithProviders(element: ReactElement, { path = "/", route = "/" }: { path?: string; route?: string } = {}) {
-  const queryClient = createQueryClient({ defaultOptions: { queries: { retry: false } } });
+  const queryClient = createAppQueryClient({ retry: false });
   const router = createMemoryRouter(
     [
       { path, element },

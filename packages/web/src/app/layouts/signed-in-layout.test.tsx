@@ -72,4 +72,23 @@ describe("the signed-in layout", () => {
     expect(await screen.findByText("The database is not answering.")).toBeTruthy();
     expect(screen.getByRole("button", { name: "Try again" })).toBeTruthy();
   });
+
+  it("sends the person to sign in when a page's data answers 401 after the refresh", async () => {
+    let sessionAlive = true;
+    const { fetchMock } = routeFetch((key) => {
+      if (key === "GET /api/v1/auth/me") return sessionAlive ? { status: 200, body: meAs("surveyor") } : notSignedIn;
+      if (key === "POST /api/v1/auth/refresh") return notSignedIn;
+      if (key === "GET /api/v1/projects") {
+        // The session ends on the server while the page loads.
+        sessionAlive = false;
+        return notSignedIn;
+      }
+      return undefined;
+    });
+    vi.stubGlobal("fetch", fetchMock);
+    const { router } = renderApp("/projects");
+    expect(await screen.findByRole("heading", { name: "Sign in" })).toBeTruthy();
+    expect(router.state.location.pathname).toBe("/sign-in");
+    expect(new URLSearchParams(router.state.location.search).get("next")).toBe("/projects");
+  });
 });
