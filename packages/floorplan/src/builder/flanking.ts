@@ -6,7 +6,7 @@ import { constructionOf, pieceSettings, type BuildContext } from "./context.js";
 import type { LinkInput, LinkTrace } from "./types.js";
 
 function element(ref: string, c: Construction, areaM2: number) {
-  return { ref, tl_db: [...c.tlDb], area_m2: areaM2, mass_kg_m2: Math.max(c.surfaceDensityKgM2, 0.1) };
+  return { ref, tl_db: c.tlDb, area_m2: areaM2, mass_kg_m2: Math.max(c.surfaceDensityKgM2, 0.1) };
 }
 
 function distinctDirections(j: Junction): number {

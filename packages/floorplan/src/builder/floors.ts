@@ -15,8 +15,8 @@ function floorLink(ctx: BuildContext, upper: Room, lowerId: string, areaM2: numb
   const linkId = `floor:${ref}`;
   const link: LinkInput = {
     id: linkId, type: "floor", between: [upper.id, lowerId], ref, name: `Floor of ${upper.name} over ${spaceName(ctx, lowerId)}`,
-    area_m2: areaM2, tl_db: [...c.tlDb],
-    ...(c.impactLnDb ? { impact: { ln_db: [...c.impactLnDb], ...(covering ? { delta_l_db: [...covering.deltaLDb] } : {}) } } : {}),
+    area_m2: areaM2, tl_db: c.tlDb,
+    ...(c.impactLnDb ? { impact: { ln_db: c.impactLnDb, ...(covering ? { delta_l_db: covering.deltaLDb } : {}) } } : {}),
     ...(c.source.kind === "estimate" ? { estimate: true } : {}),
   };
   return { link, trace: { linkId, kind: "floor", refs: [ref, upper.id, lowerId], levelId, polyline: [centre], spaces: [upper.id, lowerId] } };
@@ -30,7 +30,7 @@ function ceilingLink(ctx: BuildContext, v: Void, room: Room, areaM2: number): { 
   const between: [string, string] = above ? [v.id, room.id] : [room.id, v.id];
   const link: LinkInput = {
     id: linkId, type: "floor", between, ref, name: above ? `Ceiling of ${room.name} to ${v.name}` : `Floor of ${room.name} over ${v.name}`,
-    area_m2: areaM2, tl_db: [...c.tlDb], ...(c.source.kind === "estimate" ? { estimate: true } : {}),
+    area_m2: areaM2, tl_db: c.tlDb, ...(c.source.kind === "estimate" ? { estimate: true } : {}),
   };
   return { link, trace: { linkId, kind: "ceiling", refs: [ref, room.id, v.id], levelId: room.levelId, polyline: [polygonCentroid(room.outline)], spaces: between } };
 }

@@ -17,7 +17,7 @@ export function leakAreasM2(o: { widthM: number; heightM: number; type: Opening[
 
 /** A per-band part of a wall link from a catalogue construction. */
 export function tlPart(id: string, ref: string, kind: "wall" | "door" | "window" | "ceiling" | "floor", name: string, areaM2: number, c: Construction): Part {
-  return { id, ref, kind, name, area_m2: areaM2, tl_db: [...c.tlDb], construction: c.id, ...(c.source.kind === "estimate" ? { estimate: true } : {}) };
+  return { id, ref, kind, name, area_m2: areaM2, tl_db: c.tlDb, construction: c.id, ...(c.source.kind === "estimate" ? { estimate: true } : {}) };
 }
 
 /**

@@ -13,8 +13,17 @@ function byId<T extends { id: string }>(list: readonly T[]): Record<string, T> {
   return out;
 }
 
+/** Freezes an object and everything inside it, so catalogue arrays can be shared by reference. */
+function deepFrozen<T>(value: T): T {
+  if (typeof value === "object" && value !== null && !Object.isFrozen(value)) {
+    for (const v of Object.values(value)) deepFrozen(v);
+    Object.freeze(value);
+  }
+  return value;
+}
+
 /** The seeded catalogue: constructions, coverings and silencers of the trade, keyed by stable id. */
-export const constructionCatalogue: Catalogue = Object.freeze({
+export const constructionCatalogue: Catalogue = deepFrozen({
   constructions: byId([...wallConstructions, ...openingConstructions, ...floorConstructions]),
   coverings: byId(coverings),
   silencers: byId(silencers),
