@@ -58,7 +58,7 @@ export function ProjectsRoute() {
               : "A surveyor or the owner creates projects; they will appear here."}
         </EmptyState>
       ) : (
-        <ProjectsTable projects={projects.data} />
+        <ProjectsTable projects={projects.data} showClients={!isClient} />
       )}
       {mayCreate ? (
         <NewProjectDialog

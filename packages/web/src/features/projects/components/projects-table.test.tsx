@@ -69,4 +69,11 @@ describe("ProjectsTable", () => {
     expect(screen.queryByRole("table")).toBeNull();
     expect(screen.getByText("No project matches")).toBeTruthy();
   });
+
+  it("leaves out the clients column when asked", () => {
+    renderWithProviders(<ProjectsTable projects={projects} showClients={false} />);
+    expect(screen.queryByRole("columnheader", { name: "Clients" })).toBeNull();
+    expect(screen.queryByText("Ivo Marsh")).toBeNull();
+    expect(screen.getAllByRole("columnheader")).toHaveLength(4);
+  });
 });

@@ -73,7 +73,7 @@ const sortLabels: Record<string, string> = { title: "title", status: "status", u
 const statusFilterOptions = [{ value: "", label: "All statuses" }, ...projectStatusSchema.options.map((status) => ({ value: status, label: statusLabels[status] }))];
 
 /** The firm's projects, sortable by title, status and last update, filtered by text and status. */
-export function ProjectsTable({ projects }: { projects: Project[] }) {
+export function ProjectsTable({ projects, showClients = true }: { projects: Project[]; showClients?: boolean }) {
   const [sorting, setSorting] = useState<SortingState>([{ id: "updatedAt", desc: true }]);
   const [search, setSearch] = useState("");
   const [status, setStatus] = useState("");
@@ -82,7 +82,8 @@ export function ProjectsTable({ projects }: { projects: Project[] }) {
   const table = useReactTable({
     data: projects,
     columns,
-    state: { sorting, globalFilter: search, columnFilters },
+    // A client seeing their own name in every row learns nothing; the column is for the firm.
+    state: { sorting, globalFilter: search, columnFilters, columnVisibility: { clients: showClients } },
     onSortingChange: setSorting,
     globalFilterFn: matchesText,
     getColumnCanGlobalFilter: () => true,
