@@ -14,7 +14,7 @@ export const paths = {
 
 /** Where to go after signing in: only a path on this site, never another origin. */
 export function safeNextPath(next: string | null | undefined): string {
-  if (!next || !next.startsWith("/") || next.startsWith("//") || next.startsWith("/\\")) return paths.projects;
+  if (!next || next === "/" || !next.startsWith("/") || next.startsWith("//") || next.startsWith("/\\")) return paths.projects;
   if (next.startsWith(paths.signIn) || next.startsWith(paths.signUp)) return paths.projects;
   return next;
 }
