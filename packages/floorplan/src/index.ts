@@ -72,3 +72,5 @@ export { cinemaUnderNurseryPlan } from "./demo/cinema-under-nursery.js";
 export { generateSyntheticBuilding } from "./synthetic/generate.js";
 export type { SyntheticOptions } from "./synthetic/generate.js";
 export { seededRandom } from "./synthetic/random.js";
+export { constructionFromCsv, measurementFromCsv, bandTableFromCsv, REQUIRED_LAB_BANDS_HZ } from "./catalogue/csv.js";
+export type { CsvProblem, CsvResult } from "./catalogue/csv.js";
