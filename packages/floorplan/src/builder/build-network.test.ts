@@ -121,3 +121,18 @@ describe("buildNetwork", () => {
     if (!r.ok) expect(r.problems.map((p) => p.code)).toContain("rooms-overlap");
   });
 });
+
+describe("free-standing walls", () => {
+  it("give their construction to the room boundary they are drawn along, and host openings there", () => {
+    const r = built([
+      groundLevel, room("A", 0, 0, 4, 5), room("B", 4, 0, 4, 5),
+      { type: "wall", id: "W", levelId: "L0", start: { x: 4, y: 0 }, end: { x: 4, y: 5 }, constructionId: "masonry-block-200", thicknessM: 0.2 },
+      { type: "door", id: "D2", wallRef: "W", offsetM: 3, widthM: 0.8, heightM: 2, constructionId: "door-solid-core" },
+    ], {}, { flanking: false });
+    const link = r.network.links!.find((l) => l.id === "wall:A:Ab|B:Bd");
+    if (!link || link.type !== "partition") throw new Error("no partition");
+    expect(link.parts.map((p) => p.id)).toEqual(["A:Ab|B:Bd:wall", "D2:leaf"]);
+    expect(link.parts[0]).toMatchObject({ construction: "masonry-block-200" });
+    expect(r.links[link.id]!.points!["D2"]).toEqual({ x: 4, y: 3.4 });
+  });
+});
