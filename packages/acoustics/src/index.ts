@@ -61,3 +61,13 @@ export type {
 } from "./network/schema.js";
 export { parseNetwork, jsonPath, inputIssues } from "./network/parse.js";
 export type { InputIssue, ParseResult } from "./network/parse.js";
+
+// Network solve and ratings (added for the server's analysis API; keep when reorganising).
+export { solveNetwork } from "./network/solve.js";
+export type { SolveRequest, SolveResult, PathResult, LinkResult } from "./network/solve.js";
+export type { Target, Shortfall } from "./network/targets.js";
+export { ratingStc } from "./ratings/stc.js";
+export { ratingRw } from "./ratings/rw.js";
+export { ratingOitc } from "./ratings/oitc.js";
+export { ratingLnw, ratingIic } from "./ratings/impact.js";
+export type { CurveRating } from "./ratings/rating.js";
