@@ -33,9 +33,13 @@ function valueAt(root: unknown, path: readonly PropertyKey[]): unknown {
   return v;
 }
 
-/** How far a union branch is from matching: fields the input lacks count more than wrong values. */
+/**
+ * How far a union branch is from matching: a value of the wrong type altogether counts most, then
+ * fields the input lacks, then wrong values.
+ */
 function branchDistance(issues: readonly Issue[], input: unknown): number {
-  return issues.reduce((sum, i) => sum + (valueAt(input, i.path) === undefined ? 10 : 1), 0);
+  const cost = (i: Issue) => (i.path.length === 0 && i.code === "invalid_type" ? 100 : valueAt(input, i.path) === undefined ? 10 : 1);
+  return issues.reduce((sum, i) => sum + cost(i), 0);
 }
 
 function flattenIssue(issue: Issue, base: readonly PropertyKey[], root: unknown): InputIssue[] {
