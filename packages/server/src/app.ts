@@ -5,6 +5,9 @@ import helmet from "helmet";
 import { pino, type Logger } from "pino";
 import { pinoHttp } from "pino-http";
 import type { DataSource } from "typeorm";
+import { analysisRoutes } from "./analyses/analyses.routes.js";
+import { createAnalysesService } from "./analyses/analyses.service.js";
+import { createAnalysisPool, type AnalysisPool } from "./analyses/pool.js";
 import { auditRouter } from "./audit/audit.router.js";
 import { authRouter } from "./auth/auth.router.js";
 import { createAuthService } from "./auth/auth.service.js";
@@ -20,6 +23,7 @@ import { createMailer, type Mailer } from "./mail/mailer.js";
 import { createPeopleService } from "./people/people.service.js";
 import { peopleRouter } from "./people/people.router.js";
 import { planRoutes } from "./plans/plans.routes.js";
+import { emptyPlanDocument, planDocumentCheck } from "./plans/plan-documents.js";
 import { createPlansService, type PlanDocumentCheck } from "./plans/plans.service.js";
 import { projectsRouter } from "./projects/projects.router.js";
 import { createProjectsService, type EmptyPlanFactory } from "./projects/projects.service.js";
@@ -38,12 +42,13 @@ export interface AppDeps {
   accountLimitPerAddress?: number;
   emptyPlan?: EmptyPlanFactory;
   checkPlan?: PlanDocumentCheck;
+  analysisPool?: AnalysisPool;
 }
 
 const PLAN_PUT = /^\/v1\/projects\/[^/]+\/plan$/;
 
 /** Builds the Express app over a connected DataSource; `index.ts` is what listens. */
-export function createApp(deps: AppDeps): { app: Express; mailer: Mailer } {
+export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close: () => Promise<void> } {
   const { dataSource, config } = deps;
   const logger = deps.logger ?? pino({ level: config.logLevel });
   const mailer = deps.mailer ?? createMailer(config, logger);
@@ -88,8 +93,10 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer } {
   const sessions = createSessions(dataSource, config);
   const auth = createAuthService(dataSource, config, mailer);
   const people = createPeopleService(dataSource, config, mailer);
-  const projects = createProjectsService(dataSource, deps.emptyPlan ?? (() => ({})));
-  const plans = createPlansService(dataSource, projects, deps.checkPlan ?? (() => []));
+  const projects = createProjectsService(dataSource, deps.emptyPlan ?? emptyPlanDocument);
+  const plans = createPlansService(dataSource, projects, deps.checkPlan ?? planDocumentCheck);
+  const pool = deps.analysisPool ?? createAnalysisPool();
+  const analyses = createAnalysesService(dataSource, projects, pool);
   const perAddress = deps.accountLimitPerAddress ?? 30;
 
   const api = express.Router();
@@ -103,7 +110,7 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer } {
     }),
   );
   api.use(peopleRouter(people, sessions, addressLimiter(dataSource, "accept", 15 * 60_000, perAddress)));
-  api.use(projectsRouter(projects, sessions, planRoutes(plans)));
+  api.use(projectsRouter(projects, sessions, [...planRoutes(plans), ...analysisRoutes(analyses)]));
   api.use(auditRouter(dataSource, sessions));
   api.use((req, _res, next) => next(new HttpError(404, "not_found", `There is no ${req.method} ${req.baseUrl}${req.path} in this API.`)));
 
@@ -111,5 +118,9 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer } {
   app.use("/api/v1", api);
   app.use(webAppRouter(config.webDist));
   app.use(errorHandler(logger));
-  return { app, mailer };
+  const close = async () => {
+    mailer.close();
+    if (!deps.analysisPool) await pool.close();
+  };
+  return { app, mailer, close };
 }

@@ -5,7 +5,6 @@ import { pino } from "pino";
 import { createApp } from "./app.js";
 import { loadConfig } from "./config.js";
 import { createDataSource } from "./data-source.js";
-import { emptyPlanDocument, planDocumentCheck } from "./plans/plan-documents.js";
 
 const config = loadConfig();
 const logger = pino({ level: config.logLevel });
@@ -29,7 +28,7 @@ await connectWithRetry();
 const pending = await dataSource.showMigrations();
 if (pending) logger.warn("there are migrations that have not run; run `npm run -w @hushmark/server migrate`");
 
-const { app, mailer } = createApp({ dataSource, config: { ...config, webDist }, logger, emptyPlan: emptyPlanDocument, checkPlan: planDocumentCheck });
+const { app, close } = createApp({ dataSource, config: { ...config, webDist }, logger });
 const server = createServer(app);
 server.listen(config.port, config.host, () => {
   logger.info({ url: config.publicUrl }, "Hushmark is listening");
@@ -43,7 +42,7 @@ async function shutdown(signal: string) {
   server.close();
   server.closeIdleConnections();
   setTimeout(() => server.closeAllConnections(), 3000).unref();
-  mailer.close();
+  await close().catch(() => undefined);
   await dataSource.destroy().catch(() => undefined);
   process.exit(0);
 }

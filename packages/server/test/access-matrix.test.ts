@@ -36,6 +36,7 @@ const EXPECTED: Record<string, Access> = {
   "put /projects/:projectId/plan": ["owner", "surveyor"],
   "get /projects/:projectId/plan/revisions": ["owner", "surveyor", "planner"],
   "get /projects/:projectId/plan/revisions/:version": ["owner", "surveyor", "planner"],
+  "post /projects/:projectId/analyses": "signed-in",
   "get /audit": ["owner"],
 };
 

@@ -31,7 +31,7 @@ export async function startHarness(overrides: Partial<AppDeps> = {}): Promise<Ha
   });
   const dataSource = createDataSource(config.databaseUrl, { poolSize: 5 });
   await dataSource.initialize();
-  const { app, mailer } = createApp({
+  const { app, close } = createApp({
     dataSource,
     config,
     logger: pino({ level: "silent" }),
@@ -44,7 +44,7 @@ export async function startHarness(overrides: Partial<AppDeps> = {}): Promise<Ha
     mail,
     request: () => supertest.agent(app),
     close: async () => {
-      mailer.close();
+      await close();
       await mail.close();
       await dataSource.destroy();
     },

@@ -37,6 +37,7 @@ describe("bad input", () => {
     ["save plan", "put", (id) => `/api/v1/projects/${id}/plan`, { baseVersion: -1, document: [] }, ["baseVersion", "document"]],
     ["revisions", "get", () => "/api/v1/projects/nope/plan/revisions", undefined, ["projectId"]],
     ["revision", "get", (id) => `/api/v1/projects/${id}/plan/revisions/abc`, undefined, ["version"]],
+    ["analysis", "post", (id) => `/api/v1/projects/${id}/analyses`, { planVersion: "x", source: { kind: "airborne" }, receiverId: "" }, ["planVersion", "source.spaceId", "source.spectrum", "receiverId"]],
     ["audit", "get", () => "/api/v1/audit?limit=0", undefined, ["limit"]],
   ];
 

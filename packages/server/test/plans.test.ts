@@ -16,19 +16,32 @@ describe("versioned plan saves", () => {
   });
   afterAll(async () => h.close());
 
+  /** The project's starting plan, renamed: a valid document that differs from the stored one. */
+  async function planNamed(name: string): Promise<Record<string, unknown>> {
+    const current = await owner.get(`/api/v1/projects/${projectId}/plan`);
+    return { ...current.body.document, name };
+  }
+
+  it("starts every project with a valid, empty plan at version 0", async () => {
+    const plan = await owner.get(`/api/v1/projects/${projectId}/plan`);
+    expect(plan.body.version).toBe(0);
+    expect(plan.body.document).toMatchObject({ format: "hushmark-plan", name: "Two rooms" });
+  });
+
   it("accepts a save from the current version and keeps it as a revision", async () => {
-    const saved = await surveyor.put(`/api/v1/projects/${projectId}/plan`).send({ baseVersion: 0, document: { rooms: ["a"] } });
+    const document = await planNamed("First save");
+    const saved = await surveyor.put(`/api/v1/projects/${projectId}/plan`).send({ baseVersion: 0, document });
     expect(saved.status).toBe(200);
     expect(saved.body.version).toBe(1);
     const revisions = await owner.get(`/api/v1/projects/${projectId}/plan/revisions`);
     expect(revisions.body.revisions.map((r: { version: number }) => r.version)).toEqual([1]);
     const rev = await owner.get(`/api/v1/projects/${projectId}/plan/revisions/1`);
-    expect(rev.body.document).toEqual({ rooms: ["a"] });
+    expect(rev.body.document).toEqual(document);
   });
 
   it("answers 409 to a stale save and leaves the stored plan unchanged", async () => {
     const before = await owner.get(`/api/v1/projects/${projectId}/plan`);
-    const stale = await owner.put(`/api/v1/projects/${projectId}/plan`).send({ baseVersion: before.body.version - 1, document: { rooms: ["overwritten"] } });
+    const stale = await owner.put(`/api/v1/projects/${projectId}/plan`).send({ baseVersion: before.body.version - 1, document: await planNamed("Overwritten") });
     expect(stale.status).toBe(409);
     expect(stale.body.error.code).toBe("version_conflict");
     expect(stale.body.error.details.currentVersion).toBe(before.body.version);
@@ -38,9 +51,8 @@ describe("versioned plan saves", () => {
 
   it("lets exactly one of several saves from the same version win", async () => {
     const base = (await owner.get(`/api/v1/projects/${projectId}/plan`)).body.version as number;
-    const results = await Promise.all(
-      Array.from({ length: 8 }, (_, i) => surveyor.put(`/api/v1/projects/${projectId}/plan`).send({ baseVersion: base, document: { writer: i } })),
-    );
+    const documents = await Promise.all(Array.from({ length: 8 }, (_, i) => planNamed(`Writer ${i}`)));
+    const results = await Promise.all(documents.map((document) => surveyor.put(`/api/v1/projects/${projectId}/plan`).send({ baseVersion: base, document })));
     const accepted = results.filter((r) => r.status === 200);
     expect(accepted).toHaveLength(1);
     expect(results.filter((r) => r.status === 409)).toHaveLength(7);

@@ -36,6 +36,7 @@ describe("tenant isolation and client scope", () => {
       ["delete", `/api/v1/projects/${projectId}/clients/${clientMembershipId}`],
       ["get", `/api/v1/projects/${projectId}/plan`],
       ["put", `/api/v1/projects/${projectId}/plan`, { baseVersion: 0, document: { hijacked: true } }],
+      ["post", `/api/v1/projects/${projectId}/analyses`, { planVersion: 0, source: { kind: "impact", roomId: "r" }, receiverId: "q" }],
       ["get", `/api/v1/projects/${projectId}/plan/revisions`],
       ["get", `/api/v1/projects/${projectId}/plan/revisions/0`],
       ["patch", `/api/v1/people/members/${surveyorA.membershipId}`, { role: "client" }],

@@ -1,3 +1,4 @@
+import { AnalysisCache } from "./analysis-cache.entity.js";
 import { AuditEvent } from "./audit-event.entity.js";
 import { Invitation } from "./invitation.entity.js";
 import { Membership } from "./membership.entity.js";
@@ -12,10 +13,11 @@ import { Session } from "./session.entity.js";
 import { User } from "./user.entity.js";
 
 export {
-  AuditEvent, Invitation, Membership, Organization, PasswordReset, Plan, PlanRevision, Project, ProjectClient, RateLimitBucket, Session, User,
+  AnalysisCache, AuditEvent, Invitation, Membership, Organization, PasswordReset, Plan, PlanRevision, Project, ProjectClient, RateLimitBucket, Session, User,
 };
 
 /** Every entity, for the DataSource. */
 export const entities = [
   Organization, User, Membership, Project, ProjectClient, Plan, PlanRevision, AuditEvent, Session, Invitation, PasswordReset, RateLimitBucket,
+  AnalysisCache,
 ];

@@ -1,4 +1,8 @@
 import { InitialSchema1796149875228 } from "./1796149875228-InitialSchema.js";
+import { AnalysisCache1796150944729 } from "./1796150944729-AnalysisCache.js";
 
-/** Every migration in order; a new one is generated with `npm run -w @hushmark/server migration:generate -- src/migrations/Name` and appended here. */
-export const migrations = [InitialSchema1796149875228];
+/**
+ * Every migration in order. A new one is generated with
+ * `npm run -w @hushmark/server migration:generate -- src/migrations/Name` and appended here.
+ */
+export const migrations = [InitialSchema1796149875228, AnalysisCache1796150944729];

@@ -1,0 +1,55 @@
+import { createHash } from "node:crypto";
+import type { DataSource } from "typeorm";
+import { canonicalJson } from "@hushmark/floorplan";
+import type { AnalysisResult } from "@hushmark/schemas";
+import type { Actor } from "../auth/actor.js";
+import { AnalysisCache } from "../entities/index.js";
+import { HttpError, notFound } from "../http/errors.js";
+import type { ProjectsService } from "../projects/projects.service.js";
+import type { ParsedAnalysisRequest } from "./compute.js";
+import type { AnalysisPool } from "./pool.js";
+
+/** Bumped when the computation changes, so older cached results are not served. */
+const ENGINE_CACHE_GENERATION = "1";
+
+function cacheKey(request: ParsedAnalysisRequest): string {
+  const canonical = canonicalJson(request);
+  return createHash("sha256").update(`${ENGINE_CACHE_GENERATION}|${canonical}`).digest("hex");
+}
+
+/**
+ * Analyses of a project's plan at a given version: served from the cache when the same inputs
+ * were computed before, otherwise computed in the worker pool and cached.
+ */
+export function createAnalysesService(dataSource: DataSource, projects: ProjectsService, pool: AnalysisPool) {
+  const cache = dataSource.getRepository(AnalysisCache);
+
+  async function documentAt(projectId: string, version: number): Promise<unknown> {
+    const current: { version: number; document: unknown }[] = await dataSource.query("SELECT version, document FROM plans WHERE project_id = $1", [projectId]);
+    if (current[0]?.version === version) return current[0].document;
+    const revision: { document: unknown }[] = await dataSource.query("SELECT document FROM plan_revisions WHERE project_id = $1 AND version = $2", [projectId, version]);
+    if (!revision[0]) throw notFound(`Version ${version} of this plan`);
+    return revision[0].document;
+  }
+
+  async function analyse(actor: Actor, projectId: string, request: ParsedAnalysisRequest): Promise<AnalysisResult> {
+    await projects.get(actor, projectId);
+    const key = cacheKey(request);
+    const hit = await cache.findOne({ where: { projectId, cacheKey: key } });
+    if (hit) return { ...(hit.result as Omit<AnalysisResult, "cached" | "computeMs">), planVersion: request.planVersion, cached: true, computeMs: hit.computeMs };
+    const document = await documentAt(projectId, request.planVersion);
+    const outcome = await pool.run(document, request);
+    if (!outcome.ok) throw new HttpError(outcome.status, outcome.code, outcome.message, outcome.problems.length ? outcome.problems : undefined);
+    await cache
+      .createQueryBuilder()
+      .insert()
+      .values({ projectId, cacheKey: key, planVersion: request.planVersion, result: outcome.result as never, computeMs: outcome.computeMs })
+      .orIgnore()
+      .execute();
+    return { ...outcome.result, planVersion: request.planVersion, cached: false, computeMs: outcome.computeMs };
+  }
+
+  return { analyse };
+}
+
+export type AnalysesService = ReturnType<typeof createAnalysesService>;

@@ -1,0 +1,128 @@
+import { readFileSync } from "node:fs";
+import type supertest from "supertest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { generateSyntheticBuilding, serializePlan } from "@hushmark/floorplan";
+import { addMember, newFirm, startHarness, type Harness } from "./harness.js";
+
+const demoPlan = JSON.parse(readFileSync(new URL("../../../examples/fernhollow-studio.plan.json", import.meta.url), "utf8")) as Record<string, unknown>;
+
+const request = (planVersion: number, extra: Record<string, unknown> = {}) => ({
+  planVersion,
+  source: { kind: "airborne", spaceId: "cafe", spectrum: { kind: "library", id: "speech-raised" } },
+  receiverId: "record",
+  target: { kind: "nc", nc: 25 },
+  ...extra,
+});
+
+describe("the analysis API", () => {
+  let h: Harness;
+  let owner: supertest.Agent;
+  let client: supertest.Agent;
+  let projectId: string;
+  let version: number;
+
+  beforeAll(async () => {
+    h = await startHarness();
+    owner = (await newFirm(h)).agent;
+    const member = await addMember(h, owner, "client");
+    client = member.agent;
+    projectId = (await owner.post("/api/v1/projects").send({ title: "Studio next to a café" })).body.id;
+    await owner.post(`/api/v1/projects/${projectId}/clients`).send({ membershipId: member.membershipId });
+    const saved = await owner.put(`/api/v1/projects/${projectId}/plan`).send({ baseVersion: 0, document: demoPlan });
+    expect(saved.status).toBe(200);
+    version = saved.body.version;
+  });
+  afterAll(async () => h.close());
+
+  it("analyses the demo plan: the receiver is quieter than the source, elements ranked by share", async () => {
+    const res = await owner.post(`/api/v1/projects/${projectId}/analyses`).send(request(version));
+    expect(res.status, JSON.stringify(res.body).slice(0, 400)).toBe(200);
+    const body = res.body;
+    expect(body.cached).toBe(false);
+    expect(body.receiver.levelsDb).toHaveLength(21);
+    expect(body.receiver.dba).toBeLessThan(body.source.dba - 20);
+    expect(body.elements.length).toBeGreaterThan(2);
+    const shares = body.elements.map((e: { share: number }) => e.share);
+    expect([...shares].sort((a, b) => b - a)).toEqual(shares);
+    for (const e of body.elements) expect(e.gainIfPerfectDb).toBeGreaterThanOrEqual(0);
+    expect(body.paths.length).toBeGreaterThan(0);
+    expect(body.paths[0].label).toMatch(/^Path 1 — /);
+    expect(body.target).toMatchObject({ kind: "nc", value: 25 });
+  });
+
+  it("serves the same inputs from the cache with the same numbers", async () => {
+    const first = await owner.post(`/api/v1/projects/${projectId}/analyses`).send(request(version, { paths: 3 }));
+    const second = await owner.post(`/api/v1/projects/${projectId}/analyses`).send(request(version, { paths: 3 }));
+    expect(second.body.cached).toBe(true);
+    expect(second.body.receiver).toEqual(first.body.receiver);
+    expect(second.body.elements).toEqual(first.body.elements);
+  });
+
+  it("lets the project's client read a result", async () => {
+    const res = await client.post(`/api/v1/projects/${projectId}/analyses`).send(request(version));
+    expect(res.status).toBe(200);
+  });
+
+  it("answers 400 for an unknown receiver and for an unknown spectrum, with a message", async () => {
+    const unknown = await owner.post(`/api/v1/projects/${projectId}/analyses`).send(request(version, { receiverId: "attic-that-is-not-there" }));
+    expect(unknown.status).toBe(400);
+    expect(unknown.body.error.message).toMatch(/not a room or space/);
+    const spectrum = await owner
+      .post(`/api/v1/projects/${projectId}/analyses`)
+      .send(request(version, { source: { kind: "airborne", spaceId: "cafe", spectrum: { kind: "library", id: "no-such-sound" } } }));
+    expect(spectrum.status).toBe(400);
+    expect(spectrum.body.error.message).toMatch(/no source spectrum/);
+    const missing = await owner.post(`/api/v1/projects/${projectId}/analyses`).send(request(version + 50));
+    expect(missing.status).toBe(404);
+  });
+
+  it("answers 422 with the problems when the plan cannot be analysed", async () => {
+    const broken = structuredClone(demoPlan) as { elements: Record<string, { type: string; widthM?: number }> };
+    const door = Object.values(broken.elements).find((e) => e.type === "door")!;
+    door.widthM = 40;
+    const saved = await owner.put(`/api/v1/projects/${projectId}/plan`).send({ baseVersion: version, document: broken });
+    expect(saved.status).toBe(200);
+    const res = await owner.post(`/api/v1/projects/${projectId}/analyses`).send(request(saved.body.version));
+    expect(res.status).toBe(422);
+    expect(res.body.error.code).toBe("plan_problems");
+    expect(res.body.error.details.length).toBeGreaterThan(0);
+    expect(res.body.error.details[0].message.length).toBeGreaterThan(10);
+    // The earlier version is still there and still analyses.
+    expect((await owner.post(`/api/v1/projects/${projectId}/analyses`).send(request(version))).status).toBe(200);
+    version = saved.body.version;
+  });
+
+  it("refuses a document that is not a plan, and keeps the stored one", async () => {
+    const before = await owner.get(`/api/v1/projects/${projectId}/plan`);
+    const res = await owner.put(`/api/v1/projects/${projectId}/plan`).send({ baseVersion: before.body.version, document: { format: "something-else" } });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe("invalid_plan");
+    expect((await owner.get(`/api/v1/projects/${projectId}/plan`)).body).toEqual(before.body);
+  });
+
+  it("keeps answering other requests while a large plan is analysed in the worker pool", async () => {
+    const big = JSON.parse(serializePlan(generateSyntheticBuilding({ rooms: 600, levels: 3, seed: 7 }))) as Record<string, unknown>;
+    const bigProject = (await owner.post("/api/v1/projects").send({ title: "Big building" })).body.id as string;
+    const saved = await owner.put(`/api/v1/projects/${bigProject}/plan`).send({ baseVersion: 0, document: big });
+    expect(saved.status).toBe(200);
+    const rooms = Object.values(big.elements as Record<string, { type: string; id: string }>).filter((e) => e.type === "room");
+    const started = performance.now();
+    let analysisDone = 0;
+    const analysis = owner
+      .post(`/api/v1/projects/${bigProject}/analyses`)
+      .send({ planVersion: saved.body.version, source: { kind: "airborne", spaceId: rooms[0]!.id, spectrum: { kind: "library", id: "music-amplified-bass" } }, receiverId: rooms[rooms.length - 1]!.id })
+      .then((r) => {
+        analysisDone = performance.now();
+        return r;
+      });
+    await new Promise((r) => setTimeout(r, 5));
+    const health = await h.request().get("/api/v1/health");
+    const healthDone = performance.now();
+    const result = await analysis;
+    expect(health.status).toBe(200);
+    expect(result.status, JSON.stringify(result.body).slice(0, 300)).toBe(200);
+    // The health answer did not wait for the analysis to finish.
+    expect(healthDone).toBeLessThan(analysisDone);
+    expect(healthDone - started).toBeLessThan(analysisDone - started);
+  });
+});
