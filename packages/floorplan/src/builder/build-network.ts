@@ -3,6 +3,7 @@ import type { Catalogue } from "../catalogue/types.js";
 import type { Plan } from "../document/schema.js";
 import { planWallPieces } from "../geometry/walls.js";
 import { planIsAnalysable, validatePlan } from "../validation/validate.js";
+import { withBoundaryLosses } from "./absorption.js";
 import { buildContext } from "./context.js";
 import { buildFlankingLinks } from "./flanking.js";
 import { buildFloorLinks } from "./floors.js";
@@ -11,6 +12,10 @@ import type { BuildOptions, BuildResult, LinkInput, LinkTrace, NetworkSourceInpu
 import { buildVentLinks } from "./vents.js";
 import { buildWallLinks } from "./walls.js";
 import { OUTDOORS_ID } from "../document/ids.js";
+import { BAND_COUNT } from "../catalogue/bands.js";
+import { problem } from "../validation/make.js";
+import { absorptionWithLinks } from "./spaces.js";
+import { linkTauSM2 } from "./transmitting-area.js";
 
 /**
  * Turns a plan and a catalogue into the engine's network (docs/network-format.md): rooms, voids,
@@ -28,7 +33,23 @@ export function buildNetwork(plan: Plan, catalogue: Catalogue, options: BuildOpt
   const traces: Record<string, LinkTrace> = {};
   for (const p of parts) for (const t of p.traces) traces[t.linkId] = t;
   const needsOutdoors = links.some((l) => l.between.includes(OUTDOORS_ID)) || (options.sources ?? []).some((s) => s.type === "airborne" && s.spaceId === OUTDOORS_ID);
-  const { spaces, traces: spaceTraces } = buildSpaces(ctx, needsOutdoors);
+  const { spaces, traces: spaceTraces, measured } = buildSpaces(ctx, needsOutdoors);
+  const outM2 = new Map<string, number[]>();
+  for (const l of links) {
+    for (const end of l.between) {
+      const acc = outM2.get(end) ?? new Array<number>(BAND_COUNT).fill(0);
+      for (let b = 0; b < BAND_COUNT; b++) acc[b]! += linkTauSM2(l, b);
+      outM2.set(end, acc);
+    }
+  }
+  const assumptions = [...problems];
+  for (const space of spaces) {
+    if (space.kind === "outdoors") continue;
+    const { absorption, raised } = absorptionWithLinks(space, outM2.get(space.id) ?? new Array<number>(BAND_COUNT).fill(0), measured.has(space.id));
+    delete space.rt60_s;
+    space.absorption_m2 = absorption.map((a) => Math.max(a, 1e-6));
+    if (raised) assumptions.push(problem("absorption-raised", space.ref ?? space.id, `The absorption recorded for ${space.name ?? space.id} is less than the sound its walls, floors and vents let out in some bands; it was raised to match.`, "Check the measured reverberation time or absorption, and the constructions around the space."));
+  }
   const sources: NetworkSourceInput[] = [];
   for (const s of options.sources ?? []) {
     if (s.type === "airborne") {
@@ -40,6 +61,6 @@ export function buildNetwork(plan: Plan, catalogue: Catalogue, options: BuildOpt
       }
     }
   }
-  const network: NetworkInput = { format: NETWORK_FORMAT, version: NETWORK_FORMAT_VERSION, bands: "third-octave", name: plan.name, spaces, links, sources };
-  return { ok: true, network, links: traces, spaces: spaceTraces, assumptions: problems };
+  const network: NetworkInput = withBoundaryLosses({ format: NETWORK_FORMAT, version: NETWORK_FORMAT_VERSION, bands: "third-octave", name: plan.name, spaces, links, sources });
+  return { ok: true, network, links: traces, spaces: spaceTraces, assumptions };
 }

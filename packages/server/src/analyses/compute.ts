@@ -78,8 +78,9 @@ export function computeAnalysis(document: unknown, request: ParsedAnalysisReques
   const solved = solveNetwork(network.value, { receiver: request.receiverId, k: request.paths, gains: 20, ...(target ? { target } : {}) });
   const onPlan = mapResultToPlan(plan, built, solved);
   const sourceSpace = solved.spaces.find((s) => s.id === sourceId);
+  const elementNames = new Map(onPlan.elements.map((e) => [e.elementId, e.name]));
   const labelFor = (steps: (typeof onPlan.paths)[number]["steps"]) => {
-    const via = steps.filter((s) => s.kind === "element").map((s) => (s.kind === "element" ? spaceName(plan, s.elementId) : ""));
+    const via = steps.flatMap((s) => (s.kind === "element" ? [elementNames.get(s.elementId) ?? spaceName(plan, s.elementId)] : []));
     return via.length ? `via ${via.join(", then ")}` : "direct";
   };
   return {
