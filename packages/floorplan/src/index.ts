@@ -74,3 +74,4 @@ export type { SyntheticOptions } from "./synthetic/generate.js";
 export { seededRandom } from "./synthetic/random.js";
 export { constructionFromCsv, measurementFromCsv, bandTableFromCsv, REQUIRED_LAB_BANDS_HZ } from "./catalogue/csv.js";
 export type { CsvProblem, CsvResult } from "./catalogue/csv.js";
+export { constructionRatings, coveringDeltaLwDb } from "./catalogue/ratings.js";

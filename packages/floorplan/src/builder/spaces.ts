@@ -21,9 +21,39 @@ export function absorptionFields(finish: Finish | undefined, surfaceM2: number, 
   return { absorption_m2: preset.alpha.map((a) => Math.max(a * surfaceM2, 0.01)) };
 }
 
+/** Extra absorption when a given absorption area is smaller than what the space's links let out (no unit). */
+export const TRANSMISSION_MARGIN = 1.05;
+
+/**
+ * Absorption per band that includes what leaves through the links, m² (the network format takes
+ * A as given, so it must). Drawn-surface absorption (presets, assumed values) gets the links' τS
+ * added; a measured figure already contains it and is only raised where the links would let out
+ * more than it, which the caller reports.
+ */
+export function absorptionWithLinks(space: SpaceInput, outM2: readonly number[], measured: boolean): { absorption: number[]; raised: boolean } {
+  const given = outM2.map((_, b) => {
+    const a = space.absorption_m2;
+    if (a !== undefined) return typeof a === "number" ? a : a[b]!;
+    const t = space.rt60_s;
+    const rt = t === undefined ? ASSUMED_RT60_S : typeof t === "number" ? t : t[b]!;
+    return (0.16 * (space.volume_m3 ?? 0)) / rt;
+  });
+  if (!measured) return { absorption: given.map((a, b) => a + outM2[b]!), raised: false };
+  let raised = false;
+  const absorption = given.map((a, b) => {
+    const need = TRANSMISSION_MARGIN * outM2[b]!;
+    if (a >= need) return a;
+    raised = true;
+    return need;
+  });
+  return { absorption, raised };
+}
+
 /** Network spaces for rooms, voids, neighbours and the outdoors, with where each sits on the plan. */
-export function buildSpaces(ctx: BuildContext, needsOutdoors: boolean): { spaces: SpaceInput[]; traces: Record<string, SpaceTrace> } {
+export function buildSpaces(ctx: BuildContext, needsOutdoors: boolean): { spaces: SpaceInput[]; traces: Record<string, SpaceTrace>; measured: Set<string> } {
   const spaces: SpaceInput[] = [];
+  // Spaces whose absorption was measured or entered (it already includes what leaves through the links).
+  const measured = new Set<string>();
   const traces: Record<string, SpaceTrace> = {};
   for (const room of ctx.rooms.values()) {
     const h = levelHeightM(ctx, room.levelId);
@@ -34,6 +64,7 @@ export function buildSpaces(ctx: BuildContext, needsOutdoors: boolean): { spaces
       ...absorptionFields(room.finish, surface),
       ...(room.use === "bedroom" || room.use === "nursery" ? { sleeping_room: true } : {}),
     });
+    if (room.finish && room.finish.kind !== "preset") measured.add(room.id);
     traces[room.id] = { spaceId: room.id, levelId: room.levelId, centre: polygonCentroid(room.outline) };
   }
   for (const v of elementsOfType(ctx.plan, "void")) {
@@ -43,15 +74,17 @@ export function buildSpaces(ctx: BuildContext, needsOutdoors: boolean): { spaces
       id: v.id, kind: v.kind === "ceiling-void" ? "void" : v.kind, name: v.name, ref: v.id,
       volume_m3: Math.max(area * v.depthM, 0.01), ...absorptionFields(v.finish, surface, VOID_ALPHA),
     });
+    if (v.finish && v.finish.kind !== "preset") measured.add(v.id);
     traces[v.id] = { spaceId: v.id, levelId: v.levelId, centre: polygonCentroid(v.outline) };
   }
   for (const n of elementsOfType(ctx.plan, "neighbour")) {
     spaces.push({ id: n.id, kind: "neighbour", name: n.name, ref: n.id, volume_m3: n.volumeM3 ?? NEIGHBOUR_DEFAULTS.volumeM3, absorption_m2: n.absorptionM2 ?? NEIGHBOUR_DEFAULTS.absorptionM2 });
+    if (n.absorptionM2 !== undefined) measured.add(n.id);
     traces[n.id] = { spaceId: n.id, levelId: null, centre: null };
   }
   if (needsOutdoors) {
     spaces.push({ id: OUTDOORS_ID, kind: "outdoors", name: "Outdoors" });
     traces[OUTDOORS_ID] = { spaceId: OUTDOORS_ID, levelId: null, centre: null };
   }
-  return { spaces, traces };
+  return { spaces, traces, measured };
 }

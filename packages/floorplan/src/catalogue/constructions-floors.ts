@@ -28,7 +28,7 @@ const gypsumCeiling = (layers: number): Leaf => ({ massKgM2: 10 * layers, critic
 
 function fitted(est: number[], stc: number, model: string): { tlDb: number[]; note: string } {
   const { tlDb, shiftDb } = shiftedToStc(est, stc);
-  return { tlDb: rounded(nonNegative(tlDb)), note: `STC ${stc} published in ${SPRINGER}. Band curve: ${model}, moved ${shiftDb >= 0 ? "+" : ""}${shiftDb} dB so its STC matches (negative values set to 0 dB); band values are an estimate.` };
+  return { tlDb: rounded(nonNegative(tlDb)), note: `STC ${stc} published in ${SPRINGER}. Band curve: ${model}, moved ${shiftDb >= 0 ? "+" : ""}${shiftDb} dB so its STC matches (below 125 Hz not below the unshifted estimate where that stays under the 125 Hz value; negative values set to 0 dB); band values are an estimate.` };
 }
 
 const joistWithCeiling = fitted(doubleLeafTlDb({ leaf1: board, leaf2: gypsumCeiling(1), cavityM: 0.22, absorber: false, bridgeLimitDb: 12 }), 37, "double-leaf estimate (Sharp) for an 18 mm subfloor on 220 mm joists with a 12.7 mm gypsum ceiling fixed to them");

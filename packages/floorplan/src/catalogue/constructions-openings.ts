@@ -13,7 +13,7 @@ function fitted(id: string, name: string, category: "door" | "window", o: { esti
   const { tlDb, shiftDb } = shiftedToStc(o.estimate, o.stc);
   return {
     id, name, category, thicknessMm: o.thicknessMm, surfaceDensityKgM2: o.massKgM2, tlDb: rounded(nonNegative(tlDb)),
-    source: { kind: "shaped", note: `STC ${o.stc} published in ${o.source}. Band curve: ${o.model}, moved ${shiftDb >= 0 ? "+" : ""}${shiftDb} dB so its STC matches (negative values set to 0 dB); band values are an estimate.` },
+    source: { kind: "shaped", note: `STC ${o.stc} published in ${o.source}. Band curve: ${o.model}, moved ${shiftDb >= 0 ? "+" : ""}${shiftDb} dB so its STC matches (below 125 Hz not below the unshifted estimate where that stays under the 125 Hz value; negative values set to 0 dB); band values are an estimate.` },
   };
 }
 

@@ -14,7 +14,7 @@ function fittedToStc(estimate: number[], stc: number, source: string, model: str
   const { tlDb, shiftDb } = shiftedToStc(estimate, stc);
   return {
     tlDb: rounded(nonNegative(tlDb)),
-    note: `STC ${stc} published in ${source}. Band curve: ${model}, moved ${shiftDb >= 0 ? "+" : ""}${shiftDb} dB so its STC matches (negative values set to 0 dB); band values are an estimate.`,
+    note: `STC ${stc} published in ${source}. Band curve: ${model}, moved ${shiftDb >= 0 ? "+" : ""}${shiftDb} dB so its STC matches (below 125 Hz not below the unshifted estimate where that stays under the 125 Hz value; negative values set to 0 dB); band values are an estimate.`,
   };
 }
 

@@ -1,28 +1,25 @@
-import { BANDS_HZ } from "./bands.js";
+import { ratingStc } from "@hushmark/acoustics";
+import { BANDS_HZ, rounded } from "./bands.js";
 
-// TODO(engine): replace with the engine's STC rating once @hushmark/acoustics exports it. Only
-// used to fit catalogue curves to published STC values; the ratings shown to users come from
-// `constructionRatings`, which calls the engine.
-const STC_CONTOUR = [-16, -13, -10, -7, -4, -1, 0, 1, 2, 3, 4, 4, 4, 4, 4, 4];
-const STC_FIRST = BANDS_HZ.indexOf(125);
+const I125 = BANDS_HZ.indexOf(125);
 
-/** STC of a 21-band curve per ASTM E413 (deficiencies ≤ 32 dB in total, ≤ 8 dB in any band), dB. */
+/** STC of a 21-band curve by the engine's ASTM E413 procedure (no unit). */
 export function stcForFit(tlDb: readonly number[]): number {
-  for (let c = 150; c > 0; c--) {
-    let sum = 0, worst = 0;
-    STC_CONTOUR.forEach((off, k) => {
-      const d = Math.max(0, c + off - tlDb[STC_FIRST + k]!);
-      sum += d;
-      worst = Math.max(worst, d);
-    });
-    if (sum <= 32 && worst <= 8) return c;
-  }
-  return 0;
+  return ratingStc(new Map(BANDS_HZ.map((hz, i) => [hz, tlDb[i]!]))).value;
 }
 
-/** A curve moved up or down by whole decibels until its STC equals `stc` (dB); the shift is returned too. */
-export function shiftedToStc(tlDb: readonly number[], stc: number): { tlDb: number[]; shiftDb: number } {
-  // A uniform whole-dB shift moves the contour fit by exactly the same amount.
-  const shiftDb = stc - stcForFit(tlDb);
-  return { tlDb: tlDb.map((v) => v + shiftDb), shiftDb };
+/**
+ * A physical estimate moved by whole decibels until its STC equals a published `stc`, dB (a
+ * uniform whole-dB shift moves the STC by exactly as much). Below 125 Hz, outside the STC range,
+ * a downward shift is not allowed to take the curve below the unshifted estimate capped at the
+ * shifted 125 Hz value, so a fit driven by the mid bands does not empty the bass.
+ */
+export function shiftedToStc(rawEstimateDb: readonly number[], stc: number): { tlDb: number[]; shiftDb: number } {
+  // Round first: whole-dB shifts of a 0.1 dB grid need no rounding afterwards, which could move the rating.
+  const estimateDb = rounded(rawEstimateDb);
+  const shiftDb = stc - stcForFit(estimateDb);
+  const shifted = estimateDb.map((v) => v + shiftDb);
+  const at125 = shifted[I125]!;
+  const tlDb = shifted.map((v, i) => (i < I125 ? Math.max(v, Math.min(estimateDb[i]!, at125)) : v));
+  return { tlDb, shiftDb };
 }

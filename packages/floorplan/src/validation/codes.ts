@@ -23,6 +23,7 @@ export const PROBLEM_CODES = {
   "finish-assumed": "warning",
   "wall-setting-orphaned": "warning",
   "penetration-no-area": "warning",
+  "absorption-raised": "warning",
 } as const;
 
 export type ProblemCode = keyof typeof PROBLEM_CODES;
