@@ -104,25 +104,46 @@ export function overTransmittingSpaces(c: CompiledNetwork): { space: number; ban
   return out;
 }
 
-/** Update space j from its neighbours; returns its largest relative change. */
-function relax(c: CompiledNetwork, p: EnergyProblem, e: Float64Array, j: number, acc: Float64Array, floor: number): number {
+/**
+ * One Gauss–Seidel sweep over `order` (forward or backward); returns the largest relative change.
+ * Written with local typed arrays only: this loop is the solver's whole cost.
+ */
+function sweepOnce(
+  c: CompiledNetwork,
+  p: EnergyProblem,
+  e: Float64Array,
+  order: Int32Array,
+  forward: boolean,
+  acc: Float64Array,
+  floor: number,
+): number {
   const B = c.B;
   const w = c.weight;
-  for (let b = 0; b < B; b++) acc[b] = p.injection[j * B + b]!;
-  for (let k = c.adjStart[j]!; k < c.adjStart[j + 1]!; k++) {
-    const ib = c.adjNode[k]! * B;
-    const lb = c.adjLink[k]! * B;
-    for (let b = 0; b < B; b++) acc[b]! += w[lb + b]! * e[ib + b]!;
-  }
+  const absorption = c.absorption;
+  const adjStart = c.adjStart;
+  const adjNode = c.adjNode;
+  const adjLink = c.adjLink;
+  const injection = p.injection;
+  const count = order.length;
   let change = 0;
-  const jb = j * B;
-  for (let b = 0; b < B; b++) {
-    const v = acc[b]! / c.absorption[jb + b]!;
-    if (v > floor) {
-      const d = Math.abs(v - e[jb + b]!) / v;
-      if (d > change) change = d;
+  for (let t = 0; t < count; t++) {
+    const j = order[forward ? t : count - 1 - t]!;
+    const jb = j * B;
+    for (let b = 0; b < B; b++) acc[b] = injection[jb + b]!;
+    const end = adjStart[j + 1]!;
+    for (let k = adjStart[j]!; k < end; k++) {
+      const ib = adjNode[k]! * B;
+      const lb = adjLink[k]! * B;
+      for (let b = 0; b < B; b++) acc[b] = acc[b]! + w[lb + b]! * e[ib + b]!;
     }
-    e[jb + b] = v;
+    for (let b = 0; b < B; b++) {
+      const v = acc[b]! / absorption[jb + b]!;
+      if (v > floor) {
+        const d = Math.abs(v - e[jb + b]!) / v;
+        if (d > change) change = d;
+      }
+      e[jb + b] = v;
+    }
   }
   return change;
 }
@@ -150,13 +171,7 @@ export function solveEnergies(
   let previous = Infinity;
   let errorEstimate = Infinity;
   for (let sweep = 1; sweep <= maxSweeps; sweep++) {
-    let change = 0;
-    const forward = sweep % 2 === 1;
-    for (let t = 0; t < order.length; t++) {
-      const j = order[forward ? t : order.length - 1 - t] as number;
-      const d = relax(c, p, e, j, acc, floor);
-      if (d > change) change = d;
-    }
+    const change = sweepOnce(c, p, e, order, sweep % 2 === 1, acc, floor);
     if (!(maxEnergy(e, order, c.B) <= ceiling)) {
       return { energy: e, stats: { sweeps: sweep, converged: false, diverged: true, errorEstimate: Infinity } };
     }
