@@ -75,3 +75,5 @@ export { seededRandom } from "./synthetic/random.js";
 export { constructionFromCsv, measurementFromCsv, bandTableFromCsv, REQUIRED_LAB_BANDS_HZ } from "./catalogue/csv.js";
 export type { CsvProblem, CsvResult } from "./catalogue/csv.js";
 export { constructionRatings, coveringDeltaLwDb } from "./catalogue/ratings.js";
+export { analysePlan, engineTarget } from "./analysis/analyse.js";
+export type { AnalysisRequest, AnalysisResult } from "./analysis/analyse.js";

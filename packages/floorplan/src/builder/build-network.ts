@@ -3,7 +3,6 @@ import type { Catalogue } from "../catalogue/types.js";
 import type { Plan } from "../document/schema.js";
 import { planWallPieces } from "../geometry/walls.js";
 import { planIsAnalysable, validatePlan } from "../validation/validate.js";
-import { withBoundaryLosses } from "./absorption.js";
 import { buildContext } from "./context.js";
 import { buildFlankingLinks } from "./flanking.js";
 import { buildFloorLinks } from "./floors.js";
@@ -38,7 +37,8 @@ export function buildNetwork(plan: Plan, catalogue: Catalogue, options: BuildOpt
   for (const l of links) {
     for (const end of l.between) {
       const acc = outM2.get(end) ?? new Array<number>(BAND_COUNT).fill(0);
-      for (let b = 0; b < BAND_COUNT; b++) acc[b]! += linkTauSM2(l, b);
+      const tauS = linkTauSM2(l);
+      for (let b = 0; b < BAND_COUNT; b++) acc[b]! += tauS[b]!;
       outM2.set(end, acc);
     }
   }
@@ -61,6 +61,6 @@ export function buildNetwork(plan: Plan, catalogue: Catalogue, options: BuildOpt
       }
     }
   }
-  const network: NetworkInput = withBoundaryLosses({ format: NETWORK_FORMAT, version: NETWORK_FORMAT_VERSION, bands: "third-octave", name: plan.name, spaces, links, sources });
+  const network: NetworkInput = { format: NETWORK_FORMAT, version: NETWORK_FORMAT_VERSION, bands: "third-octave", name: plan.name, spaces, links, sources };
   return { ok: true, network, links: traces, spaces: spaceTraces, assumptions };
 }
