@@ -5,3 +5,4 @@ export * from "./people.js";
 export * from "./projects.js";
 export * from "./plans.js";
 export * from "./analyses.js";
+export * from "./catalogue.js";

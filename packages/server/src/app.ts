@@ -9,6 +9,8 @@ import { analysisRoutes } from "./analyses/analyses.routes.js";
 import { createAnalysesService } from "./analyses/analyses.service.js";
 import { createAnalysisPool, type AnalysisPool } from "./analyses/pool.js";
 import { auditRouter } from "./audit/audit.router.js";
+import { catalogueRouter } from "./catalogue/catalogue.router.js";
+import { createCatalogueService } from "./catalogue/catalogue.service.js";
 import { authRouter } from "./auth/auth.router.js";
 import { createAuthService } from "./auth/auth.service.js";
 import { DEFAULT_SIGN_IN_LIMITS, addressLimiter, signInLimiters, type LimitSettings } from "./auth/rate-limit.js";
@@ -96,7 +98,8 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
   const projects = createProjectsService(dataSource, deps.emptyPlan ?? emptyPlanDocument);
   const plans = createPlansService(dataSource, projects, deps.checkPlan ?? planDocumentCheck);
   const pool = deps.analysisPool ?? createAnalysisPool();
-  const analyses = createAnalysesService(dataSource, projects, pool);
+  const catalogue = createCatalogueService(dataSource);
+  const analyses = createAnalysesService(dataSource, projects, catalogue, pool);
   const perAddress = deps.accountLimitPerAddress ?? 30;
 
   const api = express.Router();
@@ -111,6 +114,7 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
   );
   api.use(peopleRouter(people, sessions, addressLimiter(dataSource, "accept", 15 * 60_000, perAddress)));
   api.use(projectsRouter(projects, sessions, [...planRoutes(plans), ...analysisRoutes(analyses)]));
+  api.use(catalogueRouter(catalogue, sessions));
   api.use(auditRouter(dataSource, sessions));
   api.use((req, _res, next) => next(new HttpError(404, "not_found", `There is no ${req.method} ${req.baseUrl}${req.path} in this API.`)));
 

@@ -37,6 +37,10 @@ const EXPECTED: Record<string, Access> = {
   "get /projects/:projectId/plan/revisions": ["owner", "surveyor", "planner"],
   "get /projects/:projectId/plan/revisions/:version": ["owner", "surveyor", "planner"],
   "post /projects/:projectId/analyses": "signed-in",
+  "get /catalogue": ["owner", "surveyor", "planner"],
+  "post /catalogue/constructions/preview": ["owner", "surveyor"],
+  "post /catalogue/constructions": ["owner", "surveyor"],
+  "delete /catalogue/constructions/:constructionId": ["owner", "surveyor"],
   "get /audit": ["owner"],
 };
 
@@ -46,6 +50,7 @@ function concretePath(path: string): string {
   return `/api/v1${path}`
     .replace(":token", "x".repeat(43))
     .replace(":version", "1")
+    .replace(":constructionId", "no-such-construction")
     .replace(/:[a-zA-Z]+/g, () => randomUUID());
 }
 

@@ -5,6 +5,7 @@ import type { AnalysisResult } from "@hushmark/schemas";
 import type { Actor } from "../auth/actor.js";
 import { AnalysisCache } from "../entities/index.js";
 import { HttpError, notFound } from "../http/errors.js";
+import type { CatalogueService } from "../catalogue/catalogue.service.js";
 import type { ProjectsService } from "../projects/projects.service.js";
 import type { ParsedAnalysisRequest } from "./compute.js";
 import type { AnalysisPool } from "./pool.js";
@@ -12,16 +13,16 @@ import type { AnalysisPool } from "./pool.js";
 /** Bumped when the computation changes, so older cached results are not served. */
 const ENGINE_CACHE_GENERATION = "1";
 
-function cacheKey(request: ParsedAnalysisRequest): string {
+function cacheKey(request: ParsedAnalysisRequest, catalogueDigest: string): string {
   const canonical = canonicalJson(request);
-  return createHash("sha256").update(`${ENGINE_CACHE_GENERATION}|${canonical}`).digest("hex");
+  return createHash("sha256").update(`${ENGINE_CACHE_GENERATION}|${catalogueDigest}|${canonical}`).digest("hex");
 }
 
 /**
  * Analyses of a project's plan at a given version: served from the cache when the same inputs
  * were computed before, otherwise computed in the worker pool and cached.
  */
-export function createAnalysesService(dataSource: DataSource, projects: ProjectsService, pool: AnalysisPool) {
+export function createAnalysesService(dataSource: DataSource, projects: ProjectsService, catalogues: CatalogueService, pool: AnalysisPool) {
   const cache = dataSource.getRepository(AnalysisCache);
 
   async function documentAt(projectId: string, version: number): Promise<unknown> {
@@ -34,11 +35,12 @@ export function createAnalysesService(dataSource: DataSource, projects: Projects
 
   async function analyse(actor: Actor, projectId: string, request: ParsedAnalysisRequest): Promise<AnalysisResult> {
     await projects.get(actor, projectId);
-    const key = cacheKey(request);
+    const { extra, digest } = await catalogues.catalogueFor(actor.organizationId);
+    const key = cacheKey(request, digest);
     const hit = await cache.findOne({ where: { projectId, cacheKey: key } });
     if (hit) return { ...(hit.result as Omit<AnalysisResult, "cached" | "computeMs">), planVersion: request.planVersion, cached: true, computeMs: hit.computeMs };
     const document = await documentAt(projectId, request.planVersion);
-    const outcome = await pool.run(document, request);
+    const outcome = await pool.run({ document, request, constructions: extra });
     if (!outcome.ok) throw new HttpError(outcome.status, outcome.code, outcome.message, outcome.problems.length ? outcome.problems : undefined);
     await cache
       .createQueryBuilder()

@@ -1,7 +1,7 @@
 import { parseNetwork, solveNetwork, type Target as EngineTarget } from "@hushmark/acoustics";
 import {
-  BANDS_HZ, buildNetwork, constructionCatalogue, mapResultToPlan, OUTDOORS_ID, parsePlan, sourceSpectrum,
-  type Catalogue, type Plan, type Problem,
+  BANDS_HZ, buildNetwork, catalogueWith, constructionCatalogue, mapResultToPlan, OUTDOORS_ID, parsePlan, sourceSpectrum,
+  type Catalogue, type Construction, type Plan, type Problem,
 } from "@hushmark/floorplan";
 import type { AnalysisResult, AnalysisTarget, PlanProblem } from "@hushmark/schemas";
 import { analysisRequestSchema } from "@hushmark/schemas";
@@ -45,6 +45,15 @@ function failure(status: 400 | 422, code: string, message: string, problems: Pla
  * worker thread.
  */
 export function computeAnalysis(document: unknown, request: ParsedAnalysisRequest, catalogue: Catalogue = constructionCatalogue): AnalysisOutcome {
+  return analyse(document, request, catalogue);
+}
+
+/** The same with a firm's own constructions added to the built-in catalogue. */
+export function computeAnalysisWith(document: unknown, request: ParsedAnalysisRequest, firmConstructions: Construction[]): AnalysisOutcome {
+  return analyse(document, request, firmConstructions.length ? catalogueWith(constructionCatalogue, { constructions: firmConstructions }) : constructionCatalogue);
+}
+
+function analyse(document: unknown, request: ParsedAnalysisRequest, catalogue: Catalogue): AnalysisOutcome {
   const parsed = parsePlan(document);
   if (!parsed.ok) {
     return failure(422, "plan_problems", "The saved plan is not a valid plan document.", parsed.problems.slice(0, 50).map(problemDto));

@@ -1,9 +1,10 @@
 import { availableParallelism } from "node:os";
 import { Piscina } from "piscina";
-import type { AnalysisOutcome, ParsedAnalysisRequest } from "./compute.js";
+import type { AnalysisOutcome } from "./compute.js";
+import type { AnalysisTask } from "./worker.js";
 
 export interface AnalysisPool {
-  run(document: unknown, request: ParsedAnalysisRequest): Promise<AnalysisOutcome & { computeMs: number }>;
+  run(task: AnalysisTask): Promise<AnalysisOutcome & { computeMs: number }>;
   close(): Promise<void>;
 }
 
@@ -26,7 +27,7 @@ export function createAnalysisPool(size = Math.max(1, availableParallelism() - 1
     idleTimeout: 60_000,
   });
   return {
-    run: (document, request) => pool.run({ document, request }),
+    run: (task) => pool.run(task),
     close: () => pool.destroy(),
   };
 }

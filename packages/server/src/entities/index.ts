@@ -1,5 +1,6 @@
 import { AnalysisCache } from "./analysis-cache.entity.js";
 import { AuditEvent } from "./audit-event.entity.js";
+import { FirmConstruction } from "./firm-construction.entity.js";
 import { Invitation } from "./invitation.entity.js";
 import { Membership } from "./membership.entity.js";
 import { Organization } from "./organization.entity.js";
@@ -13,11 +14,11 @@ import { Session } from "./session.entity.js";
 import { User } from "./user.entity.js";
 
 export {
-  AnalysisCache, AuditEvent, Invitation, Membership, Organization, PasswordReset, Plan, PlanRevision, Project, ProjectClient, RateLimitBucket, Session, User,
+  AnalysisCache, AuditEvent, FirmConstruction, Invitation, Membership, Organization, PasswordReset, Plan, PlanRevision, Project, ProjectClient, RateLimitBucket, Session, User,
 };
 
 /** Every entity, for the DataSource. */
 export const entities = [
   Organization, User, Membership, Project, ProjectClient, Plan, PlanRevision, AuditEvent, Session, Invitation, PasswordReset, RateLimitBucket,
-  AnalysisCache,
+  AnalysisCache, FirmConstruction,
 ];
