@@ -27,7 +27,7 @@ export function buildNetwork(plan: Plan, catalogue: Catalogue, options: BuildOpt
   const problems = validatePlan(plan, catalogue, pieces);
   if (!planIsAnalysable(problems)) return { ok: false, problems };
   const ctx = buildContext(plan, catalogue, pieces);
-  const parts = [buildWallLinks(ctx), buildFloorLinks(ctx), buildVentLinks(ctx), ...(options.flanking === false ? [] : [buildFlankingLinks(ctx)])];
+  const parts = [buildWallLinks(ctx), buildFloorLinks(ctx), buildVentLinks(ctx), ...(options.flanking === false ? [] : [buildFlankingLinks(ctx, options.flankingPruneDb)])];
   const links: LinkInput[] = parts.flatMap((p) => p.links);
   const traces: Record<string, LinkTrace> = {};
   for (const p of parts) for (const t of p.traces) traces[t.linkId] = t;

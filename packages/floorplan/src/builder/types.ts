@@ -31,6 +31,8 @@ export type SpaceInput = NetworkInput["spaces"][number];
 export interface BuildOptions {
   /** Add simplified ISO 12354-1 flanking paths at wall junctions (default true). */
   flanking?: boolean;
+  /** Leave out flanking paths weaker than the wall they flank by more than this in every band, dB (default 20; Infinity keeps all). */
+  flankingPruneDb?: number;
   /** Fixed sources to put in the network (airborne spectra or impact on a room's floor). */
   sources?: Array<{ type: "airborne"; spaceId: string; levelsDb: number[] } | { type: "impact"; roomId: string; lnOffsetDb?: number }>;
 }
