@@ -182,3 +182,4 @@ export { costLevelFrontier } from "./upgrades/pareto.js";
 export type { Frontier, FrontierPoint } from "./upgrades/pareto.js";
 export { evaluateUpgrades, evaluateCombination, optionsAlone } from "./upgrades/evaluate.js";
 export type { UpgradeReport, UpgradeReportRequest, OptionAlone } from "./upgrades/evaluate.js";
+export * from "./signal/index.js";
