@@ -82,6 +82,6 @@ describe("apiRequest", () => {
     const error = (await apiRequest("/projects").catch((caught: unknown) => caught)) as ApiError;
     expect(error.status).toBe(502);
     expect(error.code).toBe("server_error");
-    expect(error.message).toMatch(/on our side/);
+    expect(error.message).toMatch(/not answering/);
   });
 });

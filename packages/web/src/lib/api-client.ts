@@ -49,6 +49,9 @@ const fallbackMessages: Record<number, string> = {
   409: "Someone else changed this in the meantime.",
   413: "That is too large to send.",
   429: "Too many attempts. Wait a little and try again.",
+  502: "Hushmark's server is not answering right now. Try again in a moment.",
+  503: "Hushmark's server is not answering right now. Try again in a moment.",
+  504: "Hushmark's server is not answering right now. Try again in a moment.",
 };
 
 async function errorFromResponse(response: Response): Promise<ApiError> {

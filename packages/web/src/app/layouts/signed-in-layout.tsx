@@ -25,7 +25,8 @@ export function SignedInLayout() {
       return <Navigate to={signInWithNext(`${location.pathname}${location.search}`)} replace />;
     }
     return (
-      <main className="mx-auto max-w-lg px-4 py-16">
+      <main className="mx-auto flex max-w-lg flex-col items-center gap-8 px-4 py-16">
+        <Wordmark />
         <ErrorState title="Hushmark could not check your session" error={me.error} onRetry={() => void me.refetch()} />
       </main>
     );

@@ -1,3 +1,4 @@
+import { lazy, Suspense } from "react";
 import { useParams } from "react-router-dom";
 import { EmptyState } from "../../components/ui/empty-state";
 import { useCurrentMe } from "../../features/auth/components/use-current-me";
@@ -5,6 +6,9 @@ import { PlanSummary } from "../../features/projects/components/plan-summary";
 import { SectionPlaceholder } from "../../features/projects/components/section-placeholder";
 import type { ProjectSection } from "../../features/projects/components/sections";
 import { can } from "../../lib/permissions";
+import { PageLoading } from "../../components/ui/spinner";
+
+const SketchSection = lazy(() => import("../../features/editor/sketch-section"));
 
 export function ProjectSectionRoute({ section }: { section: ProjectSection }) {
   const { projectId = "" } = useParams();
@@ -12,6 +16,14 @@ export function ProjectSectionRoute({ section }: { section: ProjectSection }) {
 
   if (!section.clientVisible && !can.seeAllSections(me.membership.role)) {
     return <EmptyState title={`${section.label} is for the firm's team`}>Your contractor shares the plan, the sound paths, the proposal and the verification with you.</EmptyState>;
+  }
+
+  if (section.slug === "sketch") {
+    return (
+      <Suspense fallback={<PageLoading label="Opening the plan" />}>
+        <SketchSection projectId={projectId} />
+      </Suspense>
+    );
   }
 
   return <SectionPlaceholder section={section}>{section.slug === "sketch" ? <PlanSummary projectId={projectId} /> : null}</SectionPlaceholder>;

@@ -1,0 +1,97 @@
+import { forwardRef, useEffect, useImperativeHandle, useRef, useState, type ReactNode } from "react";
+import { Group, Layer, Stage } from "react-konva";
+import type Konva from "konva";
+import type { Plan, Problem } from "@hushmark/floorplan";
+import type { Tool } from "@hushmark/editor-core";
+import type { Viewport } from "../model/viewport";
+import { ElementsGroup } from "./elements-group";
+import { LabelsGroup } from "./labels-group";
+import { GridLayer } from "./grid-layer";
+import { UiGroup } from "./ui-group";
+import { usePointerGestures } from "./use-pointer-gestures";
+
+export interface PlanCanvasProps {
+  plan: Plan;
+  levelId: string;
+  /** The level below, drawn faintly so rooms can be stacked over it. */
+  ghostLevelId?: string | null;
+  selection: readonly string[];
+  problems: readonly Problem[];
+  viewport: Viewport;
+  setViewport: (update: (v: Viewport) => Viewport) => void;
+  width: number;
+  height: number;
+  tool: Tool | null;
+  /** The analysis overlay, drawn in plan metres above the elements. */
+  overlay?: ReactNode;
+  /** Labels for the overlay, in screen pixels. */
+  overlayLabels?: ReactNode;
+  onKeyDown?: (e: React.KeyboardEvent<HTMLDivElement>) => void;
+  label: string;
+  cursor?: string;
+}
+
+export interface PlanCanvasHandle {
+  stage: () => Konva.Stage | null;
+}
+
+/**
+ * The plan drawing: four Konva layers — grid (static), elements (plan metres, redrawn only for
+ * what changed), analysis overlay, and UI (selection, problems, the tool's rubber band). Hit-testing
+ * is editor-core's, so no Konva node listens for events; the wrapper div takes the pointer.
+ */
+export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function PlanCanvas(props, ref) {
+  const { plan, levelId, ghostLevelId, selection, problems, viewport: v, setViewport, width, height, tool, overlay, overlayLabels, onKeyDown, label, cursor } = props;
+  const stageRef = useRef<Konva.Stage>(null);
+  const [, setTick] = useState(0);
+  useImperativeHandle(ref, () => ({ stage: () => stageRef.current }), []);
+  const gestures = usePointerGestures({ viewport: v, setViewport, tool, onToolEvent: () => setTick((t) => t + 1) });
+
+  useEffect(() => {
+    const up = (e: KeyboardEvent) => { if (e.key === " ") gestures.spaceHeld.current = false; };
+    window.addEventListener("keyup", up);
+    return () => window.removeEventListener("keyup", up);
+  }, [gestures.spaceHeld]);
+
+  return (
+    <div
+      role="application"
+      aria-label={label}
+      aria-roledescription="plan drawing"
+      tabIndex={0}
+      className="relative h-full w-full touch-none select-none overflow-hidden bg-paper outline-none focus-visible:ring-2 focus-visible:ring-focus"
+      style={{ cursor: cursor ?? "default" }}
+      data-testid="plan-canvas"
+      onPointerDown={gestures.onPointerDown}
+      onPointerMove={gestures.onPointerMove}
+      onPointerUp={gestures.onPointerUp}
+      onPointerCancel={gestures.onPointerCancel}
+      onWheel={gestures.onWheel}
+      onKeyDown={(e) => {
+        if (e.key === " ") gestures.spaceHeld.current = true;
+        onKeyDown?.(e);
+        setTick((t) => t + 1);
+      }}
+    >
+      <Stage ref={stageRef} width={width} height={height} listening={false}>
+        <GridLayer v={v} width={width} height={height} />
+        <Layer listening={false}>
+          <Group x={v.ox} y={v.oy} scaleX={v.scale} scaleY={-v.scale}>
+            {ghostLevelId ? <ElementsGroup plan={plan} levelId={ghostLevelId} ghost /> : null}
+            <ElementsGroup plan={plan} levelId={levelId} />
+          </Group>
+          <Group x={v.ox} y={v.oy}>
+            <LabelsGroup plan={plan} levelId={levelId} scale={v.scale} unit={plan.displayUnit} />
+          </Group>
+        </Layer>
+        <Layer listening={false}>
+          <Group x={v.ox} y={v.oy} scaleX={v.scale} scaleY={-v.scale}>{overlay}</Group>
+          {overlayLabels}
+        </Layer>
+        <Layer listening={false}>
+          <UiGroup plan={plan} selection={selection} problems={problems} overlay={tool?.overlay ?? {}} v={v} />
+        </Layer>
+      </Stage>
+    </div>
+  );
+});

@@ -1,0 +1,31 @@
+import { useState } from "react";
+import type { Plan } from "@hushmark/floorplan";
+import { planToSvg, type ExportMarkup } from "../export/plan-svg";
+import { downloadBlob, fileSafe, svgToPng } from "../export/download";
+
+/** PNG and SVG export of the level shown, with title block, scale bar, optional north arrow and (on Paths) the legend. */
+export function ExportMenu({ plan, levelId, title, markup }: { plan: Plan; levelId: string; title: string; markup?: ExportMarkup }) {
+  const [open, setOpen] = useState(false);
+  const [north, setNorth] = useState(true);
+  const [error, setError] = useState<string | null>(null);
+  const make = () => {
+    const level = plan.elements[levelId];
+    return planToSvg(plan, levelId, { title, levelName: level?.type === "level" ? level.name : "", date: new Date().toLocaleDateString(), north, ...(markup ? { markup } : {}) });
+  };
+  const name = `${fileSafe(title)}${markup ? "-sound-paths" : "-plan"}`;
+  return (
+    <div className="relative">
+      <button type="button" aria-expanded={open} onClick={() => setOpen((o) => !o)} className="min-h-9 rounded-md px-2 text-[14px] font-medium hover:bg-ink/5">Export</button>
+      {open ? (
+        <div className="absolute right-0 top-10 z-20 flex w-56 flex-col gap-1 rounded-md border border-rule bg-panel p-2 shadow-lg">
+          <label className="flex min-h-9 items-center gap-2 px-1 text-[14px]"><input type="checkbox" checked={north} onChange={(e) => setNorth(e.target.checked)} className="h-4 w-4 accent-brand" /> North arrow</label>
+          <button type="button" className="min-h-11 rounded px-2 text-left text-[14px] hover:bg-brand-soft" onClick={async () => {
+            try { const s = make(); downloadBlob(await svgToPng(s.svg, s.width, s.height, 3), `${name}.png`); setOpen(false); } catch (e) { setError((e as Error).message); }
+          }}>Image (PNG, print resolution)</button>
+          <button type="button" className="min-h-11 rounded px-2 text-left text-[14px] hover:bg-brand-soft" onClick={() => { const s = make(); downloadBlob(new Blob([s.svg], { type: "image/svg+xml" }), `${name}.svg`); setOpen(false); }}>Drawing (SVG)</button>
+          {error ? <p role="alert" className="px-1 text-sm text-danger">{error}</p> : null}
+        </div>
+      ) : null}
+    </div>
+  );
+}

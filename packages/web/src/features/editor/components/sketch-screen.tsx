@@ -1,0 +1,142 @@
+import { useCallback, useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
+import { createTool, planBounds, boundsOfMany, setPlanUnit, type Clip, type ToolEnv, type ToolId } from "@hushmark/editor-core";
+import { constructionCatalogue, validatePlan } from "@hushmark/floorplan";
+import type { PlanResponse } from "@hushmark/schemas";
+import { PlanCanvas, type PlanCanvasHandle } from "../canvas/plan-canvas";
+import { fitBounds, type Viewport } from "../model/viewport";
+import { useEditorSession, useSaveStatus } from "../hooks/use-editor-session";
+import { useElementSize } from "../hooks/use-element-size";
+import { useHistoryLabels, usePlan, useSelection } from "../hooks/use-store-value";
+import { editorKeyHandler } from "../hooks/use-editor-keys";
+import { useConflict } from "../hooks/use-conflict";
+import { ToolRail } from "./tool-rail";
+import { StatusLine } from "./status-line";
+import { DetailsPanel } from "../panels/details-panel";
+import { ElementTable } from "./element-table";
+import { ProblemsList } from "./problems-list";
+import { ConflictDialog } from "./conflict-dialog";
+import { LevelBar, levelBelow } from "./level-bar";
+import { ExportMenu } from "./export-menu";
+
+type SideTab = "details" | "elements" | "problems";
+
+const cursors: Partial<Record<ToolId, string>> = { select: "default", pan: "grab", tape: "crosshair" };
+
+/** The Sketch section: tools on the left, the plan, the selection's details on the right, the status line below. */
+export function SketchScreen({ projectId, response, title, readOnly }: { projectId: string; response: PlanResponse; title: string; readOnly: boolean }) {
+  const session = useEditorSession(projectId, response, title, readOnly);
+  const { store, autosave } = session;
+  const plan = usePlan(store);
+  const selection = useSelection(store);
+  const history = useHistoryLabels(store);
+  const status = useSaveStatus(autosave);
+  const conflict = useConflict(projectId, session);
+  const [toolId, setToolId] = useState<ToolId>("select");
+  const [levelId, setLevelId] = useState(() => Object.values(store.plan.elements).find((e) => e.type === "level")?.id ?? "ground");
+  const [side, setSide] = useState<SideTab>("details");
+  const [viewport, setViewport] = useState<Viewport>({ scale: 50, ox: 200, oy: 400 });
+  const [conflictOpen, setConflictOpen] = useState(true);
+  const canvas = useElementSize<HTMLDivElement>();
+  const canvasRef = useRef<PlanCanvasHandle>(null);
+  const clipboard = useRef<Clip | null>(null);
+  const fitted = useRef(false);
+
+  const fit = useCallback(() => setViewport(fitBounds(planBounds(store.plan, levelId), canvas.width, canvas.height)), [store, levelId, canvas.width, canvas.height]);
+  useEffect(() => {
+    if (!fitted.current && canvas.width > 0) { fitted.current = true; fit(); }
+  }, [canvas.width, fit]);
+
+  const envRef = useRef<ToolEnv>({ store, levelId, unit: plan.displayUnit, gridM: 0.05, toleranceM: 0.2 });
+  Object.assign(envRef.current, {
+    levelId, unit: plan.displayUnit, toleranceM: 12 / viewport.scale,
+    gridM: viewport.scale >= 80 ? 0.05 : viewport.scale >= 30 ? 0.1 : 0.25,
+    pan: (d: { x: number; y: number }) => setViewport((v) => ({ ...v, ox: v.ox + d.x * v.scale, oy: v.oy - d.y * v.scale })),
+    done: () => setToolId("select"),
+  });
+  const tool = useMemo(() => (readOnly ? null : createTool(toolId, envRef.current)), [toolId, readOnly]);
+  useEffect(() => () => tool?.cancel(), [tool]);
+
+  const deferredPlan = useDeferredValue(plan);
+  const problems = useMemo(() => validatePlan(deferredPlan, constructionCatalogue), [deferredPlan]);
+  const counts = { errors: problems.filter((p) => p.severity === "error").length, warnings: problems.filter((p) => p.severity === "warning").length };
+
+  const zoomTo = (id: string) => {
+    store.select([id]);
+    setSide("details");
+    const b = boundsOfMany(store.plan, [id]);
+    if (b) setViewport((v) => { const f = fitBounds(b, canvas.width, canvas.height, 120); return f.scale < v.scale ? f : { ...v, ox: canvas.width / 2 - ((b.minX + b.maxX) / 2) * v.scale, oy: canvas.height / 2 + ((b.minY + b.maxY) / 2) * v.scale }; });
+  };
+
+  const onKeyDown = editorKeyHandler({ store, tool, levelId, setTool: setToolId, setViewport, fit, size: canvas, clipboard, readOnly });
+  const hint = tool?.overlay.hint;
+
+  return (
+    <div className="flex flex-col overflow-hidden rounded-lg border border-rule bg-panel" style={{ height: "max(560px, calc(100vh - 250px))" }}>
+      <div className="flex flex-wrap items-center gap-2 border-b border-rule px-2 py-1">
+        <LevelBar plan={plan} levelId={levelId} onLevel={setLevelId} store={store} readOnly={readOnly} />
+        <span className="mx-1 h-6 w-px bg-rule" aria-hidden="true" />
+        {!readOnly ? (
+          <>
+            <button type="button" className="min-h-9 rounded-md px-2 text-[14px] hover:bg-ink/5 disabled:opacity-40" disabled={!history.undo} onClick={() => store.undo()} aria-keyshortcuts="Control+Z" title={history.undo ? `Undo ${history.undo}` : "Nothing to undo"}>Undo</button>
+            <button type="button" className="min-h-9 rounded-md px-2 text-[14px] hover:bg-ink/5 disabled:opacity-40" disabled={!history.redo} onClick={() => store.redo()} aria-keyshortcuts="Control+Shift+Z" title={history.redo ? `Redo ${history.redo}` : "Nothing to redo"}>Redo</button>
+          </>
+        ) : null}
+        <button type="button" className="min-h-9 rounded-md px-2 text-[14px] hover:bg-ink/5" onClick={fit}>Fit to plan</button>
+        <div className="ml-auto"><ExportMenu plan={plan} levelId={levelId} title={title} /></div>
+      </div>
+      {session.loadProblem ? <p role="alert" className="bg-danger/10 px-3 py-2 text-sm text-danger">The stored plan could not be read ({session.loadProblem}); a blank plan is open. Nothing is saved until you draw.</p> : null}
+      {session.restoredPending ? <p className="bg-caution/10 px-3 py-1.5 text-sm">Edits made on this device earlier and not yet saved were put back; they are being saved now.</p> : null}
+      <div className="flex min-h-0 flex-1 flex-col lg:flex-row">
+        <div className="flex min-h-0 flex-1">
+          {!readOnly ? <ToolRail active={toolId} onPick={setToolId} /> : null}
+          <div className="flex min-h-0 min-w-0 flex-1 flex-col">
+            <div ref={canvas.ref} className="min-h-0 flex-1">
+              <PlanCanvas
+                ref={canvasRef}
+                plan={plan}
+                levelId={levelId}
+                ghostLevelId={levelBelow(plan, levelId)}
+                selection={selection}
+                problems={problems}
+                viewport={viewport}
+                setViewport={setViewport}
+                width={canvas.width}
+                height={canvas.height}
+                tool={tool}
+                onKeyDown={onKeyDown}
+                label={`Plan of ${title}. Use the tools on the left; the list of elements offers the same edits by keyboard.`}
+                cursor={readOnly ? "grab" : cursors[toolId] ?? "crosshair"}
+              />
+            </div>
+            <StatusLine status={readOnly ? null : status} unit={plan.displayUnit} onUnit={readOnly ? undefined : (u) => store.run(setPlanUnit(u))} scale={viewport.scale} problems={counts} onProblems={() => setSide("problems")} hint={hint} />
+          </div>
+        </div>
+        <aside aria-label="Selection and lists" className="flex max-h-[42%] min-h-0 flex-col border-t border-rule lg:max-h-none lg:w-[340px] lg:border-l lg:border-t-0">
+          <div role="tablist" aria-label="Side panel" className="flex border-b border-rule">
+            {(["details", "elements", "problems"] as const).map((t) => (
+              <button key={t} role="tab" type="button" aria-selected={side === t} onClick={() => setSide(t)} className={`min-h-11 flex-1 border-b-[3px] text-[14px] font-medium ${side === t ? "border-brand text-brand-strong" : "border-transparent text-muted hover:text-ink"}`}>
+                {t === "details" ? "Details" : t === "elements" ? "Elements" : `Problems${counts.errors + counts.warnings ? ` (${counts.errors + counts.warnings})` : ""}`}
+              </button>
+            ))}
+          </div>
+          <div role="tabpanel" className="min-h-0 flex-1 overflow-y-auto">
+            {side === "details" ? (readOnly ? <p className="p-4 text-sm text-muted">This plan is shared with you to read. Select the Paths tab to see where the sound gets through.</p> : <DetailsPanel plan={plan} selection={selection} store={store} problems={problems} />) : null}
+            {side === "elements" ? <ElementTable plan={plan} levelId={levelId} selection={selection} store={store} /> : null}
+            {side === "problems" ? <ProblemsList plan={plan} problems={problems} onPick={zoomTo} /> : null}
+          </div>
+        </aside>
+      </div>
+      {status.kind === "conflict" && !readOnly ? (
+        <ConflictDialog
+          open={conflictOpen}
+          currentVersion={status.currentVersion}
+          busy={conflict.busy}
+          onKeepMine={() => conflict.keepMine(status.currentVersion)}
+          onTakeTheirs={() => void conflict.takeTheirs()}
+          onClose={() => setConflictOpen(false)}
+        />
+      ) : null}
+      {conflict.error ? <p role="alert" className="bg-danger/10 px-3 py-2 text-sm text-danger">{conflict.error}</p> : null}
+    </div>
+  );
+}

@@ -1,0 +1,61 @@
+import { elementsOfType, planWallPieces, openingPlacement, type Opening, type Plan, type Point } from "@hushmark/floorplan";
+import { hostOf } from "@hushmark/editor-core";
+
+/** A wall band to draw: a centreline with a real thickness (m). */
+export interface WallBand {
+  id: string;
+  levelId: string;
+  start: Point;
+  end: Point;
+  thicknessM: number;
+  kind: "shared" | "exterior" | "free";
+}
+
+const bandsCache = new WeakMap<object, WallBand[]>();
+
+/** Every wall on the plan as a band: room-outline pieces with their settings' thickness, and free walls. */
+export function wallBands(plan: Plan): WallBand[] {
+  const hit = bandsCache.get(plan.elements);
+  if (hit && bandsCache.get(plan.wallSettings) === hit) return hit;
+  const out: WallBand[] = [];
+  for (const piece of planWallPieces(plan)) {
+    const setting = plan.wallSettings[piece.id];
+    out.push({ id: piece.id, levelId: piece.levelId, start: piece.start, end: piece.end, thicknessM: setting?.thicknessM ?? plan.defaults.wallThicknessM, kind: piece.kind });
+  }
+  for (const w of elementsOfType(plan, "wall")) out.push({ id: w.id, levelId: w.levelId, start: w.start, end: w.end, thicknessM: w.thicknessM, kind: "free" });
+  bandsCache.set(plan.elements, out);
+  bandsCache.set(plan.wallSettings, out);
+  return out;
+}
+
+/** Where to draw an opening: its span on the wall line, the wall's direction and its room-side normal (m). */
+export interface OpeningSpan {
+  start: Point;
+  end: Point;
+  along: Point;
+  normal: Point;
+  thicknessM: number;
+  levelId: string;
+}
+
+export function openingSpan(plan: Plan, opening: Opening): OpeningSpan | null {
+  const host = hostOf(plan, opening.wallRef);
+  if (!host || host.lengthM === 0) return null;
+  const along = { x: (host.end.x - host.start.x) / host.lengthM, y: (host.end.y - host.start.y) / host.lengthM };
+  const at = (m: number) => ({ x: host.start.x + along.x * m, y: host.start.y + along.y * m });
+  const band = wallBands(plan).find((b) => b.id === opening.wallRef || b.id.split("|").includes(opening.wallRef));
+  return {
+    start: at(opening.offsetM),
+    end: at(opening.offsetM + opening.widthM),
+    along,
+    // Left of the edge's direction; for a counter-clockwise room outline that is inside the room.
+    normal: { x: -along.y, y: along.x },
+    thicknessM: band?.thicknessM ?? host.thicknessM,
+    levelId: host.levelId,
+  };
+}
+
+/** Whether the plan model can place an opening (off its wall, wider than it). */
+export function openingFits(plan: Plan, opening: Opening): boolean {
+  return openingPlacement(plan, planWallPieces(plan), opening, plan.defaults.wallToleranceM).ok;
+}
