@@ -1,6 +1,7 @@
 /** Which options a search may use under the client's limits, grouped by link (at most one per link). */
 import type { UpgradePlanner } from "./planner.js";
 import type { UpgradeFlag } from "./schema.js";
+import { LEVEL_TOLERANCE_DB, QUIETER } from "./objective.js";
 
 export interface SearchLimits {
   /** Money, currency units. */
@@ -36,7 +37,9 @@ export function eligibleOptions(planner: UpgradePlanner, limits: SearchLimits, s
     const banned = limits.allowedFlags ? p.option.flags.filter((f) => !limits.allowedFlags!.includes(f)) : [];
     if (banned.length > 0) return excluded.push({ id: p.option.id, reason: `flag not allowed: ${banned.join(", ")}` });
     if (!withinLimits(planner.totals([i]), limits)) return excluded.push({ id: p.option.id, reason: "alone it exceeds the limits" });
-    if (!(singleAEnergy[i]! < planner.baseAEnergy)) return excluded.push({ id: p.option.id, reason: "does not lower the received level" });
+    if (!(singleAEnergy[i]! < planner.baseAEnergy * QUIETER)) {
+      return excluded.push({ id: p.option.id, reason: `lowers the received level by less than ${LEVEL_TOLERANCE_DB} dB` });
+    }
     byLink.set(p.link, [...(byLink.get(p.link) ?? []), i]);
   });
   const groups = [...byLink.values()].map((g) => [...g].sort((a, b) => singleAEnergy[a]! - singleAEnergy[b]!));

@@ -4,7 +4,7 @@
  * then a local search that swaps, adds or drops one option while that improves the objective.
  * No optimality guarantee; each step is an exact evaluation.
  */
-import { better, candidate, type Candidate } from "./objective.js";
+import { better, candidate, QUIETER, type Candidate } from "./objective.js";
 import type { UpgradePlanner } from "./planner.js";
 import { withinLimits, type SearchLimits } from "./eligibility.js";
 
@@ -29,7 +29,7 @@ export function greedySelection(planner: UpgradePlanner, options: readonly numbe
       if (!fits(planner, chosen, limits)) continue;
       const c = candidate(planner, chosen, planner.receiverEnergy(chosen));
       const gain = current.aEnergy - c.aEnergy;
-      if (gain <= 0 && !c.meets) continue;
+      if (c.aEnergy >= current.aEnergy * QUIETER && !c.meets) continue;
       const cost = planner.totals([i]).cost;
       const score = (c.meets ? 1e300 : 0) + gain / Math.max(cost, 1e-9);
       if (best === undefined || score > best.score) best = { c, score };

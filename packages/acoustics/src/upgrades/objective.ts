@@ -1,6 +1,8 @@
 /**
  * What "best" means: with a target, the cheapest combination that reaches it (ties: the quieter);
- * when nothing reaches it (or there is no target), the quietest A-weighted level (ties: the cheaper).
+ * when nothing reaches it (or there is no target), the quietest A-weighted level, where levels
+ * within LEVEL_TOLERANCE_DB count as equal and the cheaper wins (so an option worth 0.001 dB is
+ * never bought).
  */
 import type { UpgradePlanner } from "./planner.js";
 
@@ -16,7 +18,10 @@ export function candidate(planner: UpgradePlanner, chosen: readonly number[], en
   return { chosen: [...chosen], energy, aEnergy: planner.aEnergy(energy), cost: planner.totals(chosen).cost, meets: planner.meetsTarget(energy) };
 }
 
-const REL = 1e-12;
+/** Levels closer than this (dB) are treated as equal by the searches. */
+export const LEVEL_TOLERANCE_DB = 0.01;
+/** Energy factor of LEVEL_TOLERANCE_DB: a is meaningfully quieter than b when a < b·QUIETER. */
+export const QUIETER = Math.pow(10, -LEVEL_TOLERANCE_DB / 10);
 
 /** True when a is better than b. */
 export function better(a: Candidate, b: Candidate | undefined): boolean {
@@ -24,8 +29,8 @@ export function better(a: Candidate, b: Candidate | undefined): boolean {
   if (a.meets !== b.meets) return a.meets;
   if (a.meets) {
     if (a.cost < b.cost - 1e-9) return true;
-    return a.cost <= b.cost + 1e-9 && a.aEnergy < b.aEnergy * (1 - REL);
+    return a.cost <= b.cost + 1e-9 && a.aEnergy < b.aEnergy * QUIETER;
   }
-  if (a.aEnergy < b.aEnergy * (1 - REL)) return true;
-  return a.aEnergy <= b.aEnergy * (1 + REL) && a.cost < b.cost - 1e-9;
+  if (a.aEnergy < b.aEnergy * QUIETER) return true;
+  return a.aEnergy < b.aEnergy / QUIETER && a.cost < b.cost - 1e-9;
 }

@@ -5,7 +5,7 @@
  * enough; otherwise sampled: the exact best-within-budget at a ladder of budgets plus every single
  * option, then reduced to the non-dominated points.
  */
-import { candidate, type Candidate } from "./objective.js";
+import { candidate, QUIETER, type Candidate } from "./objective.js";
 import { eligibleOptions, withinLimits, type SearchLimits } from "./eligibility.js";
 import type { UpgradePlanner } from "./planner.js";
 import { bestWithinLimits } from "./search.js";
@@ -40,13 +40,13 @@ function enumerate(planner: UpgradePlanner, groups: readonly (readonly number[])
   return out;
 }
 
-/** Non-dominated points: cheapest first, each strictly quieter than every cheaper one. */
+/** Non-dominated points: cheapest first, each meaningfully quieter (LEVEL_TOLERANCE_DB) than every cheaper one. */
 export function nonDominated(planner: UpgradePlanner, cands: readonly Candidate[]): FrontierPoint[] {
   const sorted = [...cands].sort((a, b) => a.cost - b.cost || a.aEnergy - b.aEnergy);
   const out: FrontierPoint[] = [];
   let quietest = Infinity;
   for (const c of sorted) {
-    if (c.aEnergy < quietest * (1 - 1e-12)) {
+    if (c.aEnergy < quietest * QUIETER) {
       quietest = c.aEnergy;
       out.push({ cost: c.cost, dba: energyToDb(c.aEnergy), options: c.chosen.map((i) => planner.prepared[i]!.option.id) });
     }

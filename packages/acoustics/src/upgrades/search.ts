@@ -10,7 +10,7 @@ import { isMonotoneDecrease } from "../network/perturb.js";
 import { groupEnvelope, mergePerturbations, reductionBound, summariseGroups, type GroupSummary } from "./bounds.js";
 import { eligibleOptions, withinLimits, type SearchLimits } from "./eligibility.js";
 import { heuristicBest } from "./heuristic.js";
-import { better, candidate, type Candidate } from "./objective.js";
+import { better, candidate, QUIETER, type Candidate } from "./objective.js";
 import type { CombinationResult, UpgradePlanner } from "./planner.js";
 import { energyToDb } from "../bands/levels.js";
 import { spectrum, type Spectrum } from "../bands/spectrum.js";
@@ -74,7 +74,8 @@ function prune(s: Search, from: number, chosen: readonly number[], eClip: Float6
   const budget = cheaperOnly ? Math.min(limits.budget ?? Infinity, best.cost) : limits.budget;
   const room = { cost: (budget ?? Infinity) - t.cost, labourH: (limits.labourH ?? Infinity) - t.labourH, areaM2: (limits.floorAreaM2 ?? Infinity) - t.floorAreaLostM2 };
   const lim = { ...limits, ...(budget !== undefined && Number.isFinite(budget) ? { budget } : {}) };
-  const quieter = (aLower: number) => !cheaperOnly && aLower < best.aEnergy * (1 - 1e-12);
+  // A completion matters if it can be meaningfully quieter, or about as quiet and cheaper.
+  const quieter = (aLower: number) => !cheaperOnly && (aLower < best.aEnergy * QUIETER || (aLower < best.aEnergy / QUIETER && t.cost < best.cost - 1e-9));
   const canMeet = (lower: Float64Array) => s.targetMode && meetsLower(s, lower);
   const lowerA = planner.aEnergy(eClip) - reductionBound(s.summaries, remaining, room, lim, (g) => g.reductionA);
   const lowerBands = s.targetMode ? eClip.map((v, b) => Math.max(0, v - reductionBound(s.summaries, remaining, room, lim, (g) => g.reduction[b]!))) : eClip;
