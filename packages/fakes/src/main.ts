@@ -1,6 +1,7 @@
 #!/usr/bin/env node
 // Starts every local fake on loopback for `npm start` and `npm test`; stops on SIGINT/SIGTERM.
 import { startMailFake } from "./mail-fake.js";
+import { startS3Fake } from "./s3-fake.js";
 
 const port = (name: string, fallback: number) => {
   const raw = process.env[name];
@@ -16,10 +17,16 @@ const mail = await startMailFake({
   smtpPort: port("HUSHMARK_SMTP_PORT", 55025),
   httpPort: port("HUSHMARK_MAIL_API_PORT", 55026),
 });
-console.log(`fakes ready: smtp 127.0.0.1:${mail.smtpPort}, mail api http://127.0.0.1:${mail.httpPort}`);
+const s3 = await startS3Fake({
+  port: port("HUSHMARK_S3_PORT", 55027),
+  ...(process.env.HUSHMARK_S3_DIR ? { directory: process.env.HUSHMARK_S3_DIR } : {}),
+  buckets: [process.env.HUSHMARK_S3_BUCKET ?? "hushmark"],
+});
+console.log(`fakes ready: smtp 127.0.0.1:${mail.smtpPort}, mail api http://127.0.0.1:${mail.httpPort}, s3 ${s3.endpoint}`);
 
 const stop = async () => {
   await mail.close();
+  await s3.close();
   process.exit(0);
 };
 process.on("SIGINT", stop);
