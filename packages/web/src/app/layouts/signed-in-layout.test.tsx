@@ -62,7 +62,12 @@ describe("the signed-in layout", () => {
     const tabs = await screen.findByRole("navigation", { name: "Project sections" });
     expect(within(tabs).getAllByRole("link").map((link) => link.textContent)).toEqual(["Sketch", "Paths", "Proposal", "Verify"]);
     await waitFor(() => expect(router.state.location.pathname).toBe(`/projects/${project.id}/sketch`));
-    expect(await screen.findByText("3")).toBeTruthy();
+
+    // A staff-only section typed into the address bar explains itself instead of showing.
+    await router.navigate(`/projects/${project.id}/options`);
+    expect(await screen.findByText("Options is for the firm's team")).toBeTruthy();
+    await router.navigate(`/projects/${project.id}/paths`);
+    expect(await screen.findByRole("heading", { name: "Paths" })).toBeTruthy();
   });
 
   it("offers a retry when the session check fails for another reason than signing out", async () => {
