@@ -6,3 +6,5 @@ export * from "./projects.js";
 export * from "./plans.js";
 export * from "./analyses.js";
 export * from "./catalogue.js";
+export * from "./intake.js";
+export * from "./measurements.js";
