@@ -27,9 +27,11 @@ export function energyDifferenceDb(totalDb: number, partDb: number): number {
   return energyToDb(rest);
 }
 
+const LN10_OVER_10 = Math.LN10 / 10;
+
 /** Transmission coefficient τ = 10^(−TL/10) of a transmission loss in dB. */
 export function tauOfTl(tlDb: number): number {
-  return Math.pow(10, -tlDb / 10);
+  return Math.exp(-tlDb * LN10_OVER_10);
 }
 
 /** Transmission loss in dB of a transmission coefficient: −10·lg τ. */

@@ -31,9 +31,16 @@ export function cWeightingDb(fHz: number): number {
   return 20 * Math.log10(num / den) - C1000;
 }
 
+const A_WEIGHTS = new Map<BandSetId, readonly number[]>();
+
 /** A-weighting in dB of every band of a band set, at the exact mid-frequencies. */
 export function aWeightsDb(bands: BandSetId): number[] {
-  return bandSet(bands).exactHz.map(aWeightingDb);
+  let w = A_WEIGHTS.get(bands);
+  if (w === undefined) {
+    w = Object.freeze(bandSet(bands).exactHz.map(aWeightingDb));
+    A_WEIGHTS.set(bands, w);
+  }
+  return [...w];
 }
 
 /** C-weighting in dB of every band of a band set, at the exact mid-frequencies. */
@@ -48,7 +55,7 @@ export function aWeightsLinear(bands: BandSetId): Float64Array {
 
 function weightedTotal(s: Spectrum, weightsDb: readonly number[]): number {
   let e = 0;
-  s.values.forEach((v, i) => (e += dbToEnergy(v + (weightsDb[i] as number))));
+  for (let i = 0; i < s.values.length; i++) e += dbToEnergy((s.values[i] as number) + (weightsDb[i] as number));
   return energyToDb(e);
 }
 

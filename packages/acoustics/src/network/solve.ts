@@ -86,9 +86,10 @@ export function solveBase(c: CompiledNetwork, request: { source?: string; receiv
   const receiver = receiverIndex(c, ex, request.receiver);
   const tolerance = request.tolerance ?? 1e-10;
   const fwd = solveEnergies(c, ex, { tolerance });
+  // The adjoint weights shares, path bounds and error bounds; 1e-8 relative is ample for those.
   const unit = new Float64Array(c.n * c.B);
   unit.fill(1, receiver * c.B, receiver * c.B + c.B);
-  const adj = solveEnergies(c, { fixed: ex.fixed, fixedEnergy: new Float64Array(c.n * c.B), injection: unit }, { tolerance });
+  const adj = solveEnergies(c, { fixed: ex.fixed, fixedEnergy: new Float64Array(c.n * c.B), injection: unit }, { tolerance: Math.max(tolerance, 1e-8) });
   if (!fwd.stats.converged || !adj.stats.converged) throw new NetworkSolveError(notConverged(c, fwd.stats));
   const base: BaseSolution = { c, ex, e: fwd.energy, z: adj.energy, receiver };
   return { c, ex, base, aWeights: aWeightsLinear(c.bands), forward: fwd.stats, adjoint: adj.stats };
@@ -157,10 +158,12 @@ export function solveNetwork(network: Network, request: SolveRequest): SolveResu
     levelsDb: levels.values,
     dba,
     nc: ratingNc(levels),
-    spaces: c.spaceIds.map((id, j) => {
-      const lv = levelsOf(base.e, j, B);
-      return { id, levelsDb: lv, dba: aWeightedLevelDb(spectrum(c.bands, lv)), fixed: ex.fixed[j] === 1 };
-    }),
+    spaces: c.spaceIds.map((id, j) => ({
+      id,
+      levelsDb: levelsOf(base.e, j, B),
+      dba: energyToDb(aSum(base.e.subarray(j * B, j * B + B), aWeights)),
+      fixed: ex.fixed[j] === 1,
+    })),
     paths: found.paths.map((p, i) => ({
       rank: i + 1,
       source: p.start.label,

@@ -64,9 +64,24 @@ export function linkTransmittingAreaAt(link: Link, b: number): number {
   }
 }
 
+/** Add τ·S of a partition part in every band to `out`, m². */
+function addPartTransmittingArea(part: Part, out: Float64Array): void {
+  if ("open" in part) {
+    for (let b = 0; b < out.length; b++) out[b]! += part.area_m2;
+  } else if ("dne_db" in part) {
+    for (let b = 0; b < out.length; b++) out[b]! += DNE_REFERENCE_AREA_M2 * tauOfTl(part.dne_db[b] as number);
+  } else {
+    for (let b = 0; b < out.length; b++) out[b]! += part.area_m2 * tauOfTl(part.tl_db[b] as number);
+  }
+}
+
 /** τ·S of a link in every band, m². */
 export function linkTransmittingArea(link: Link, bands: number): Float64Array {
   const out = new Float64Array(bands);
+  if (link.type === "partition") {
+    for (const p of link.parts) addPartTransmittingArea(p, out);
+    return out;
+  }
   for (let b = 0; b < bands; b++) out[b] = linkTransmittingAreaAt(link, b);
   return out;
 }
