@@ -88,3 +88,32 @@ describe("stacked rooms and voids", () => {
     expect(roomsAboveVoid(plan, v)).toEqual([{ roomId: "U", overlapM2: expect.closeTo(20, 6) }]);
   });
 });
+
+import fc from "fast-check";
+import { wallPieces } from "./walls.js";
+
+describe("wall pieces of a random grid of rooms (property)", () => {
+  it("share every inner grid line once and leave exactly the outer perimeter unshared", () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.integer({ min: 20, max: 60 }), { minLength: 1, maxLength: 5 }),
+        fc.array(fc.integer({ min: 20, max: 60 }), { minLength: 1, maxLength: 5 }),
+        fc.double({ min: -1000, max: 1000, noNaN: true }),
+        (ws, hs, shift) => {
+          const xs = [shift], ys = [-shift];
+          ws.forEach((w) => xs.push(xs.at(-1)! + w / 10));
+          hs.forEach((h) => ys.push(ys.at(-1)! + h / 10));
+          const rooms = [];
+          for (let c = 0; c < ws.length; c++) for (let r = 0; r < hs.length; r++) rooms.push(room(`g${c}x${r}`, xs[c]!, ys[r]!, xs[c + 1]! - xs[c]!, ys[r + 1]! - ys[r]!));
+          const pieces = wallPieces(rooms, 0.05);
+          const width = xs.at(-1)! - xs[0]!, height = ys.at(-1)! - ys[0]!;
+          const shared = pieces.filter((p) => p.kind === "shared").reduce((s, p) => s + p.lengthM, 0);
+          const exterior = pieces.filter((p) => p.kind === "exterior").reduce((s, p) => s + p.lengthM, 0);
+          expect(shared).toBeCloseTo((ws.length - 1) * height + (hs.length - 1) * width, 6);
+          expect(exterior).toBeCloseTo(2 * (width + height), 6);
+        },
+      ),
+      { numRuns: 60 },
+    );
+  });
+});

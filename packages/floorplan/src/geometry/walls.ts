@@ -68,48 +68,65 @@ export function roomEdges(room: Room): RoomEdge[] {
 const ANGLE_STEP = 0.01;
 
 /**
- * Pairs of edges that may lie on one line: bucketed by direction and by offset of their line
- * from the origin (neighbouring buckets included), so only near-collinear edges are compared.
+ * Pairs of edges that may lie on one line: edges are bucketed by direction and by the offset of
+ * their line from the origin, neighbouring buckets are merged into clusters (so a line straddling
+ * a bucket edge stays together), and within a cluster only edges whose extents along the line
+ * overlap are paired (sort and sweep). Near-linear in the number of edges.
  */
 function candidatePairs(edges: readonly RoomEdge[], toleranceM: number): Array<[RoomEdge, RoomEdge]> {
   const cell = Math.max(toleranceM, 1e-6) * 2;
-  const buckets = new Map<string, number[]>();
-  const keys = edges.map((e) => {
+  const steps = Math.round(Math.PI / ANGLE_STEP);
+  const bucketOf = new Map<string, number>();
+  const parent: number[] = [];
+  const find = (x: number): number => (parent[x] === x ? x : (parent[x] = find(parent[x]!)));
+  const edgeBucket = edges.map((e) => {
     let ux = (e.end.x - e.start.x) / e.lengthM, uy = (e.end.y - e.start.y) / e.lengthM;
     if (uy < 0 || (uy === 0 && ux < 0)) [ux, uy] = [-ux, -uy];
-    const angle = Math.atan2(uy, ux); // 0 ≤ angle < π
-    const a = Math.round(angle / ANGLE_STEP) % Math.round(Math.PI / ANGLE_STEP);
-    const offset = -uy * e.start.x + ux * e.start.y;
-    return { a, o: Math.floor(offset / cell) };
-  });
-  keys.forEach(({ a, o }, i) => {
+    const a = Math.round(Math.atan2(uy, ux) / ANGLE_STEP) % steps;
+    const o = Math.floor((-uy * e.start.x + ux * e.start.y) / cell);
     const key = `${a},${o}`;
-    const list = buckets.get(key) ?? [];
-    list.push(i);
-    buckets.set(key, list);
-  });
-  const pairs: Array<[RoomEdge, RoomEdge]> = [];
-  const seen = new Set<number>();
-  const n = edges.length;
-  keys.forEach(({ a, o }, i) => {
-    const steps = Math.round(Math.PI / ANGLE_STEP);
-    for (const da of [-1, 0, 1]) {
-      // Directions wrap at π, where the line offset changes sign.
-      let aa = a + da, flip = 1;
-      if (aa < 0) { aa += steps; flip = -1; }
-      if (aa >= steps) { aa -= steps; flip = -1; }
-      for (const d0 of [-1, 0, 1]) {
-        const oo = flip === 1 ? o + d0 : -o - 1 + d0;
-        for (const j of buckets.get(`${aa},${oo}`) ?? []) {
-          if (j <= i) continue;
-          const id = i * n + j;
-          if (seen.has(id)) continue;
-          seen.add(id);
-          pairs.push([edges[i]!, edges[j]!]);
+    let id = bucketOf.get(key);
+    if (id === undefined) {
+      id = parent.length;
+      parent.push(id);
+      bucketOf.set(key, id);
+      for (const da of [-1, 0, 1]) {
+        // Directions wrap at π, where the line offset changes sign.
+        let aa = a + da, flip = false;
+        if (aa < 0) [aa, flip] = [aa + steps, true];
+        if (aa >= steps) [aa, flip] = [aa - steps, true];
+        for (const d0 of [-1, 0, 1]) {
+          const other = bucketOf.get(`${aa},${flip ? -o - 1 + d0 : o + d0}`);
+          if (other !== undefined) parent[find(other)] = find(id);
         }
       }
     }
+    return id;
   });
+  const clusters = new Map<number, number[]>();
+  edgeBucket.forEach((b, i) => {
+    const root = find(b);
+    const list = clusters.get(root) ?? [];
+    list.push(i);
+    clusters.set(root, list);
+  });
+  const pairs: Array<[RoomEdge, RoomEdge]> = [];
+  for (const members of clusters.values()) {
+    if (members.length < 2) continue;
+    const first = edges[members[0]!]!;
+    const ux = (first.end.x - first.start.x) / first.lengthM, uy = (first.end.y - first.start.y) / first.lengthM;
+    const span = members
+      .map((i) => {
+        const e = edges[i]!;
+        const p = e.start.x * ux + e.start.y * uy, q = e.end.x * ux + e.end.y * uy;
+        return { i, lo: Math.min(p, q), hi: Math.max(p, q) };
+      })
+      .sort((x, y) => x.lo - y.lo);
+    for (let k = 0; k < span.length; k++) {
+      const a = span[k]!;
+      for (let m = k + 1; m < span.length && span[m]!.lo <= a.hi + toleranceM; m++) pairs.push([edges[a.i]!, edges[span[m]!.i]!]);
+    }
+  }
   return pairs;
 }
 
