@@ -2,6 +2,7 @@ import { createBrowserRouter, Navigate, type RouteObject } from "react-router-do
 import { paths } from "../config/paths";
 import { projectSections } from "../features/projects/components/sections";
 import { AuthLayout } from "./layouts/auth-layout";
+import { AccountRoute } from "./routes/account";
 import { SignedInLayout } from "./layouts/signed-in-layout";
 import { RouteError } from "./routes/route-error";
 import { ForgotPasswordRoute } from "./routes/forgot-password";
@@ -45,6 +46,7 @@ export const routes: RouteObject[] = [
             ],
           },
           { path: paths.people, element: <PeopleRoute /> },
+          { path: paths.account, element: <AccountRoute /> },
         ],
       },
     ],

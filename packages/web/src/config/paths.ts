@@ -10,6 +10,7 @@ export const paths = {
   project: (projectId: string) => `/projects/${encodeURIComponent(projectId)}`,
   projectSection: (projectId: string, section: string) => `/projects/${encodeURIComponent(projectId)}/${section}`,
   people: "/people",
+  account: "/account",
 } as const;
 
 /** Where to go after signing in: only a path on this site, never another origin. */

@@ -1,6 +1,6 @@
 import type { Me } from "@hushmark/schemas";
 import { useEffect, useId, useRef, useState } from "react";
-import { useNavigate } from "react-router-dom";
+import { Link, useNavigate } from "react-router-dom";
 import { toast } from "sonner";
 import { paths } from "../../../config/paths";
 import { roleLabels } from "../../../lib/format";
@@ -68,11 +68,18 @@ export function UserMenu({ me }: { me: Me }) {
               {roleLabels[me.membership.role]} at {me.membership.organizationName}
             </p>
           </div>
+          <Link
+            to={paths.account}
+            onClick={() => setOpen(false)}
+            className="mt-1 flex min-h-11 w-full items-center rounded-md px-2 font-medium text-ink hover:bg-ink/5"
+          >
+            Your account
+          </Link>
           <button
             type="button"
             onClick={onSignOut}
             disabled={signOut.isPending}
-            className="mt-1 flex min-h-11 w-full items-center rounded-md px-2 text-left font-medium text-ink hover:bg-ink/5"
+            className="flex min-h-11 w-full items-center rounded-md px-2 text-left font-medium text-ink hover:bg-ink/5"
           >
             {signOut.isPending ? "Signing out…" : "Sign out"}
           </button>
