@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { roleSchema } from "./roles.js";
+import { isWeakPassword } from "./weak-passwords.js";
 
 /** Minimum password length (no composition rules, per NIST SP 800-63B / OWASP ASVS 2.1). */
 export const PASSWORD_MIN_LENGTH = 12;
@@ -15,7 +16,8 @@ export const emailSchema = z
 export const passwordSchema = z
   .string()
   .min(PASSWORD_MIN_LENGTH, `Use at least ${PASSWORD_MIN_LENGTH} characters.`)
-  .max(PASSWORD_MAX_LENGTH, `Use at most ${PASSWORD_MAX_LENGTH} characters.`);
+  .max(PASSWORD_MAX_LENGTH, `Use at most ${PASSWORD_MAX_LENGTH} characters.`)
+  .refine((p) => !isWeakPassword(p), "That password is too common or too easy to guess. A few unrelated words make a strong one.");
 
 export const displayNameSchema = z
   .string()

@@ -8,3 +8,4 @@ export * from "./analyses.js";
 export * from "./catalogue.js";
 export * from "./intake.js";
 export * from "./measurements.js";
+export { isWeakPassword } from "./weak-passwords.js";

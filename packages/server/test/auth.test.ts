@@ -28,6 +28,14 @@ describe("sign-up, sign-in and sessions", () => {
     expect(me.body.user.email).toBe(email);
   });
 
+  it("refuses a common password at sign-up with a reason, and no composition rules", async () => {
+    const res = await h.request().post("/api/v1/auth/sign-up").send({ firmName: "Weak firm", displayName: "W", email: uniqueEmail("weak"), password: "Password1234" });
+    expect(res.status).toBe(400);
+    expect(res.body.error.details).toEqual([{ path: "password", message: expect.stringMatching(/too common/) }]);
+    const fine = await h.request().post("/api/v1/auth/sign-up").send({ firmName: "Fine firm", displayName: "F", email: uniqueEmail("fine"), password: "all lower case words" });
+    expect(fine.status).toBe(201);
+  });
+
   it("stores argon2id at OWASP's cost", async () => {
     const { email } = await newFirm(h);
     const rows: { password_hash: string }[] = await h.dataSource.query("SELECT password_hash FROM users WHERE email = $1", [email]);

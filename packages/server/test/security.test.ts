@@ -36,3 +36,23 @@ describe("headers and cross-site requests", () => {
     expect(res.body).toEqual({ status: "ok", database: "ok" });
   });
 });
+
+describe("production mode", () => {
+  it("has no development inbox", async () => {
+    const h = await startHarness();
+    try {
+      const { createApp } = await import("../src/app.js");
+      const { loadConfig } = await import("../src/config.js");
+      const config = loadConfig({ ...process.env, NODE_ENV: "production", HUSHMARK_JWT_SECRET: "x".repeat(40), HUSHMARK_LOG_LEVEL: "silent" });
+      const { app, close } = createApp({ dataSource: h.dataSource, config, analysisPool: { run: async () => { throw new Error("unused"); }, close: async () => undefined } });
+      const supertest = (await import("supertest")).default;
+      expect((await supertest(app).get("/dev/mail")).status).toBe(404);
+      expect((await supertest(app).get("/api/v1/dev/mail")).status).toBe(404);
+      const cookies = (await supertest(app).post("/api/v1/auth/sign-up").send({ firmName: "Prod firm", displayName: "P", email: `prod-${Date.now()}@test.example`, password: "a perfectly fine passphrase" })).headers["set-cookie"] as unknown as string[];
+      expect(cookies.every((c) => /; Secure/.test(c))).toBe(true);
+      await close();
+    } finally {
+      await h.close();
+    }
+  });
+});
