@@ -40,6 +40,8 @@ export default defineConfig({
         // Libraries change far less often than our code; separate chunks keep them cached across releases.
         codeSplitting: {
           groups: [
+            // The plan editor's libraries load only with the Sketch and Paths sections.
+            { name: "canvas", test: /node_modules[\\/](konva|react-konva|react-reconciler|its-fine|immer|@turf|rbush|quickselect|robust-predicates|splaytree|polyclip-ts|polygon-clipping|concaveman|earcut|tinyqueue|point-in-polygon|sweepline-intersections|geojson-equality-ts|topojson-client|topojson-server|d3-voronoi|marchingsquares|skmeans|@hushmark)[\\/]/, priority: 15 },
             { name: "react", test: /node_modules[\\/](react|react-dom|scheduler|react-router|react-router-dom)[\\/]/, priority: 30 },
             { name: "data", test: /node_modules[\\/](@tanstack|zod|react-hook-form|@hookform)[\\/]/, priority: 20 },
             { name: "vendor", test: /node_modules[\\/]/, priority: 10 },

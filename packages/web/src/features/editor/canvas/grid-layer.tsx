@@ -1,7 +1,7 @@
 import { memo } from "react";
 import { Layer, Line } from "react-konva";
 import type { Viewport } from "../model/viewport";
-import { rule } from "../colours";
+import { rule } from "./colours";
 
 /** The background grid: 1 m lines, with 0.5 m between them when zoomed in; never listens for events. */
 export const GridLayer = memo(function GridLayer({ v, width, height }: { v: Viewport; width: number; height: number }) {

@@ -1,7 +1,7 @@
 import { memo } from "react";
 import { Circle, Group, Label, Tag, Text } from "react-konva";
 import { elementsOfType, formatArea, polygonAreaM2, polygonCentroid, type Plan } from "@hushmark/floorplan";
-import { brand, ink, muted, panel } from "../colours";
+import { brand, ink, muted, panel } from "./colours";
 
 /**
  * Text in screen pixels: room names and areas, pins as rings with their label, notes. Placed at
@@ -19,8 +19,8 @@ export const LabelsGroup = memo(function LabelsGroup({ plan, levelId, scale, uni
         const area = formatArea(polygonAreaM2(r.outline), unit);
         return (
           <Group key={r.id} x={c.x * scale} y={-c.y * scale}>
-            <Text text={r.name || "Unnamed room"} fontFamily="Work Sans" fontSize={13} fontStyle="600" fill={ink} width={160} offsetX={80} offsetY={showArea ? 14 : 7} align="center" />
-            {showArea ? <Text text={area} fontFamily="Work Sans" fontSize={12} fill={muted} width={160} offsetX={80} offsetY={-3} align="center" /> : null}
+            <Text text={r.name || "Unnamed room"} fontFamily="Work Sans" fontSize={13} fontStyle="600" fill={ink} width={200} offsetX={100} offsetY={showArea ? 14 : 7} wrap="none" ellipsis align="center" />
+            {showArea ? <Text text={area} fontFamily="Work Sans" fontSize={12} fill={muted} width={200} offsetX={100} offsetY={-3} align="center" /> : null}
           </Group>
         );
       })}

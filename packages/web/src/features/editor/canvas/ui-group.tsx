@@ -3,7 +3,7 @@ import type { Plan, Point, Problem } from "@hushmark/floorplan";
 import { elementBounds, type ToolOverlay } from "@hushmark/editor-core";
 import { wallBands, openingSpan } from "../model/wall-geometry";
 import { toScreen, type Viewport } from "../model/viewport";
-import { brand, danger, focus, ink, panel } from "../colours";
+import { brand, danger, focus, ink, panel } from "./colours";
 
 const flatScreen = (v: Viewport, pts: readonly Point[]) => pts.flatMap((p) => { const s = toScreen(v, p.x, p.y); return [s.x, s.y]; });
 

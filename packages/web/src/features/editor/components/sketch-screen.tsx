@@ -1,11 +1,11 @@
 import { useCallback, useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
 import { createTool, planBounds, boundsOfMany, setPlanUnit, type Clip, type ToolEnv, type ToolId } from "@hushmark/editor-core";
-import { constructionCatalogue, validatePlan } from "@hushmark/floorplan";
+import { constructionCatalogue, levelsByElevation, validatePlan } from "@hushmark/floorplan";
 import type { PlanResponse } from "@hushmark/schemas";
 import { PlanCanvas, type PlanCanvasHandle } from "../canvas/plan-canvas";
 import { fitBounds, type Viewport } from "../model/viewport";
 import { useEditorSession, useSaveStatus } from "../hooks/use-editor-session";
-import { useElementSize } from "../hooks/use-element-size";
+import { useElementSize, useFillHeight } from "../hooks/use-element-size";
 import { useHistoryLabels, usePlan, useSelection } from "../hooks/use-store-value";
 import { editorKeyHandler } from "../hooks/use-editor-keys";
 import { useConflict } from "../hooks/use-conflict";
@@ -32,11 +32,12 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
   const status = useSaveStatus(autosave);
   const conflict = useConflict(projectId, session);
   const [toolId, setToolId] = useState<ToolId>("select");
-  const [levelId, setLevelId] = useState(() => Object.values(store.plan.elements).find((e) => e.type === "level")?.id ?? "ground");
+  const [levelId, setLevelId] = useState(() => levelsByElevation(store.plan).find((l) => l.elevationM >= 0)?.id ?? levelsByElevation(store.plan)[0]?.id ?? "ground");
   const [side, setSide] = useState<SideTab>("details");
   const [viewport, setViewport] = useState<Viewport>({ scale: 50, ox: 200, oy: 400 });
   const [conflictOpen, setConflictOpen] = useState(true);
   const canvas = useElementSize<HTMLDivElement>();
+  const frame = useFillHeight<HTMLDivElement>();
   const canvasRef = useRef<PlanCanvasHandle>(null);
   const clipboard = useRef<Clip | null>(null);
   const fitted = useRef(false);
@@ -71,7 +72,7 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
   const hint = tool?.overlay.hint;
 
   return (
-    <div className="flex flex-col overflow-hidden rounded-lg border border-rule bg-panel" style={{ height: "max(560px, calc(100vh - 250px))" }}>
+    <div ref={frame.ref} className="flex flex-col overflow-hidden rounded-lg border border-rule bg-panel" style={{ height: frame.height }}>
       <div className="flex flex-wrap items-center gap-2 border-b border-rule px-2 py-1">
         <LevelBar plan={plan} levelId={levelId} onLevel={setLevelId} store={store} readOnly={readOnly} />
         <span className="mx-1 h-6 w-px bg-rule" aria-hidden="true" />
@@ -119,7 +120,7 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
               </button>
             ))}
           </div>
-          <div role="tabpanel" className="min-h-0 flex-1 overflow-y-auto">
+          <div role="tabpanel" key={side} className="min-h-0 flex-1 overflow-y-auto">
             {side === "details" ? (readOnly ? <p className="p-4 text-sm text-muted">This plan is shared with you to read. Select the Paths tab to see where the sound gets through.</p> : <DetailsPanel plan={plan} selection={selection} store={store} problems={problems} />) : null}
             {side === "elements" ? <ElementTable plan={plan} levelId={levelId} selection={selection} store={store} /> : null}
             {side === "problems" ? <ProblemsList plan={plan} problems={problems} onPick={zoomTo} /> : null}

@@ -8,7 +8,7 @@ export function ToolRail({ active, onPick, orientation = "vertical" }: { active:
   return (
     <div role="toolbar" aria-label="Sketch tools" aria-orientation={orientation} className={`flex ${vertical ? "flex-col" : "flex-row overflow-x-auto"} gap-1 border-rule bg-panel p-1 ${vertical ? "border-r" : "border-b"}`}>
       {TOOL_GROUPS.map((group, gi) => (
-        <div key={gi} className={`flex ${vertical ? "flex-col" : "flex-row"} gap-1 ${gi ? (vertical ? "border-t border-rule pt-1" : "border-l border-rule pl-1") : ""}`}>
+        <div key={gi} className={`${vertical ? "grid grid-cols-2" : "flex flex-row"} gap-1 ${gi ? (vertical ? "border-t border-rule pt-1" : "border-l border-rule pl-1") : ""}`}>
           {group.map((t) => (
             <button
               key={t.id}

@@ -1,4 +1,6 @@
 import { useEffect, useState, useSyncExternalStore } from "react";
+import { useQueryClient, type QueryClient } from "@tanstack/react-query";
+import { projectKeys } from "../../projects/api/keys";
 import { Autosave, EditorStore, storagePendingStore, type SaveStatus } from "@hushmark/editor-core";
 import { parsePlan } from "@hushmark/floorplan";
 import type { PlanResponse } from "@hushmark/schemas";
@@ -20,7 +22,7 @@ export interface EditorSession {
   restoredPending: boolean;
 }
 
-function createSession(projectId: string, response: PlanResponse, title: string, readOnly: boolean): EditorSession {
+function createSession(projectId: string, response: PlanResponse, title: string, readOnly: boolean, queryClient: QueryClient): EditorSession {
   const opened = openPlan(response.document, projectId, title);
   const store = new EditorStore(opened.plan);
   const pending = storagePendingStore(window.localStorage, projectId);
@@ -37,7 +39,7 @@ function createSession(projectId: string, response: PlanResponse, title: string,
       pending.clear();
     }
   }
-  const autosave = new Autosave({ transport: planTransport(projectId), clock: browserClock, baseVersion, pending, debounceMs: 700 });
+  const autosave = new Autosave({ transport: planTransport(projectId, (saved) => queryClient.setQueryData(projectKeys.plan(projectId), saved)), clock: browserClock, baseVersion, pending, debounceMs: 700 });
   if (restoredPending) autosave.edited(store.plan);
   if (!readOnly) {
     store.subscribe((s) => {
@@ -49,7 +51,8 @@ function createSession(projectId: string, response: PlanResponse, title: string,
 
 /** One editing session over the loaded plan: the store, and autosave wired to it and to the connection. */
 export function useEditorSession(projectId: string, response: PlanResponse, title: string, readOnly: boolean): EditorSession {
-  const [session] = useState(() => createSession(projectId, response, title, readOnly));
+  const queryClient = useQueryClient();
+  const [session] = useState(() => createSession(projectId, response, title, readOnly, queryClient));
   useEffect(() => {
     const { autosave } = session;
     const online = () => autosave.online();

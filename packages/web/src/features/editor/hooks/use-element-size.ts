@@ -15,3 +15,21 @@ export function useElementSize<T extends HTMLElement>() {
   }, []);
   return { ref, ...size };
 }
+
+/** A height that fills the window below the element's top (px), at least `min`, so the editor never scrolls the page. */
+export function useFillHeight<T extends HTMLElement>(min = 480, bottomGap = 16) {
+  const ref = useRef<T>(null);
+  const [height, setHeight] = useState(min);
+  useLayoutEffect(() => {
+    const measure = () => {
+      const el = ref.current;
+      if (!el) return;
+      const top = el.getBoundingClientRect().top + window.scrollY;
+      setHeight(Math.max(min, Math.floor(window.innerHeight - top - bottomGap)));
+    };
+    measure();
+    window.addEventListener("resize", measure);
+    return () => window.removeEventListener("resize", measure);
+  }, [min, bottomGap]);
+  return { ref, height };
+}
