@@ -2,6 +2,7 @@
 // Starts every local fake on loopback for `npm start` and `npm test`; stops on SIGINT/SIGTERM.
 import { startMailFake } from "./mail-fake.js";
 import { startS3Fake } from "./s3-fake.js";
+import { startPaymentsFake } from "./payments-fake.js";
 
 const port = (name: string, fallback: number) => {
   const raw = process.env[name];
@@ -22,11 +23,17 @@ const s3 = await startS3Fake({
   ...(process.env.HUSHMARK_S3_DIR ? { directory: process.env.HUSHMARK_S3_DIR } : {}),
   buckets: [process.env.HUSHMARK_S3_BUCKET ?? "hushmark"],
 });
-console.log(`fakes ready: smtp 127.0.0.1:${mail.smtpPort}, mail api http://127.0.0.1:${mail.httpPort}, s3 ${s3.endpoint}`);
+const payments = await startPaymentsFake({
+  port: port("HUSHMARK_PAYMENTS_PORT", 55028),
+  webhookUrl: process.env.HUSHMARK_PAYMENTS_WEBHOOK_URL ?? "http://127.0.0.1:8080/api/v1/payments/webhook",
+  webhookSecret: process.env.HUSHMARK_STRIPE_WEBHOOK_SECRET ?? "whsec_hushmark_local",
+});
+console.log(`fakes ready: smtp 127.0.0.1:${mail.smtpPort}, mail api http://127.0.0.1:${mail.httpPort}, s3 ${s3.endpoint}, payments ${payments.url}`);
 
 const stop = async () => {
   await mail.close();
   await s3.close();
+  await payments.close();
   process.exit(0);
 };
 process.on("SIGINT", stop);
