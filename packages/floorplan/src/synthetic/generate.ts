@@ -11,6 +11,8 @@ export interface SyntheticOptions {
   seed: number;
   /** Add a ceiling void over each row of the ground level (default true). */
   voids?: boolean;
+  /** Share of ground-floor rooms with a lay-in tile ceiling into the void, the rest plasterboard (default 0.3). */
+  tileCeilingShare?: number;
 }
 
 const USES: RoomUse[] = ["office", "bedroom", "living", "meeting", "studio", "kitchen", "corridor", "storage"];
@@ -20,7 +22,8 @@ const DOORS = ["door-hollow-core", "door-solid-core", "door-solid-core-sealed"];
 /**
  * A synthetic multi-storey building for benchmarks: each level a grid of rectangular rooms whose
  * columns and rows line up between levels, doors in most shared walls, windows on the façades,
- * ducts between some rooms and a ceiling void per ground-floor row. Same seed, same plan.
+ * ducts between some rooms and a ceiling void per ground-floor row, under which about a third
+ * of the rooms have lay-in tile ceilings and the rest plasterboard. Same seed, same plan.
  */
 export function generateSyntheticBuilding(options: SyntheticOptions): Plan {
   const rand = seededRandom(options.seed);
@@ -48,10 +51,12 @@ export function generateSyntheticBuilding(options: SyntheticOptions): Plan {
         ids[r]!.push(id);
         made++;
         const preset = pick(finishPresets).id;
+        const tile = rand() < (options.tileCeilingShare ?? 0.3);
         elements.push({
           type: "room", id, levelId, name: `Room ${k}.${r}.${c}`, use: pick(USES),
           outline: rectangle(id, colX[c]!, rowY[r]!, colX[c + 1]! - colX[c]!, rowY[r + 1]! - rowY[r]!),
           finish: { kind: "preset", presetId: preset },
+          ...(k === 0 ? { ceiling: { constructionId: tile ? "ceiling-suspended-tile" : "ceiling-gypsum-12-5" } } : {}),
         });
       }
     }
@@ -95,7 +100,7 @@ export function generateSyntheticBuilding(options: SyntheticOptions): Plan {
         interiorWallConstructionId: "stud-wood-1x1-gypsum",
         exteriorWallConstructionId: "masonry-block-200",
         floorConstructionId: "floor-concrete-200",
-        ceilingConstructionId: "ceiling-suspended-tile",
+        ceilingConstructionId: "ceiling-gypsum-12-5",
       },
       wallSettings,
     },
