@@ -33,6 +33,7 @@ export type { DisplayUnit } from "./units/length.js";
 export { createTool } from "./tools/create-tool.js";
 export type { Tool, ToolEnv, ToolId, ToolOverlay, PointerInput, KeyInput } from "./tools/tool.js";
 export { selectionFor } from "./tools/select/select-target.js";
+export { InspectTool } from "./tools/inspect/inspect-tool.js";
 
 export { Autosave } from "./save/autosave.js";
 export type { AutosaveOptions } from "./save/autosave.js";

@@ -80,3 +80,18 @@ describe("pin, note, tape, pan", () => {
     expect(h.panned).toEqual({ x: 2, y: 1 });
   });
 });
+
+describe("inspect (read-only views)", () => {
+  it("a click selects, a drag pans, and the plan never changes", async () => {
+    const { InspectTool } = await import("../src/tools/inspect/inspect-tool.js");
+    const h = new ToolHarness(twoRoomPlan());
+    const before = h.plan;
+    h.tool = new InspectTool(h.env);
+    h.click(6, 1.5);
+    expect(h.store.selection).toEqual(["east"]);
+    h.drag([[2, 2], [3, 2.5]]);
+    expect(h.panned.x).toBeGreaterThan(0);
+    expect(h.plan).toBe(before);
+    expect(h.store.selection).toEqual(["east"]);
+  });
+});
