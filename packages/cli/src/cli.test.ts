@@ -147,6 +147,13 @@ describe("upgrades", () => {
     const text = await hushmark(["upgrades", "net.json", "opts.json", "--receiver", "studio", "--budget", "700"], files());
     expect(text.stdout).toMatch(/Best combination within budget 700/);
   });
+  it("evaluates a chosen combination", async () => {
+    const o = await hushmark(["upgrades", "net.json", "opts.json", "--receiver", "studio", "--combine", "seal,barrier", "--json"], files());
+    const j = JSON.parse(o.stdout);
+    expect(j.combination.options).toEqual(["seal", "barrier"]);
+    expect(j.combination.cost).toBe(40 + 15 * 40);
+    expectInputError(await hushmark(["upgrades", "net.json", "opts.json", "--receiver", "studio", "--combine", "seal,paint"], files()), /--combine: no option "paint"/);
+  });
   it("reads limits and target from the options file, the command line winning", async () => {
     const o = await hushmark(["upgrades", "net.json", "opts.json", "--receiver", "studio", "--json", "--budget", "50"], files({ options: options(), limits: { budget: 10000 }, target: { kind: "reduction", db: 3 } }));
     const j = JSON.parse(o.stdout);

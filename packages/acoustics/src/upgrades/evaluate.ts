@@ -28,6 +28,8 @@ export interface UpgradeReport {
   readonly options: readonly OptionAlone[];
   readonly best: BestResult;
   readonly frontier?: Frontier;
+  /** The combination asked for with `combine`. */
+  readonly combination?: CombinationResult;
 }
 
 export interface UpgradeReportRequest {
@@ -38,6 +40,8 @@ export interface UpgradeReportRequest {
   readonly search?: SearchOptions;
   /** Compute the cost–level frontier (default true). */
   readonly frontier?: boolean;
+  /** Option ids to evaluate together as a chosen combination. */
+  readonly combine?: readonly string[];
 }
 
 /** Each option alone, in the order given. */
@@ -70,6 +74,7 @@ export function evaluateUpgrades(network: Network, options: readonly UpgradeOpti
     options: optionsAlone(planner),
     best: bestWithinLimits(planner, request.limits ?? {}, request.search ?? {}),
     ...(request.frontier === false ? {} : { frontier: costLevelFrontier(planner, request.limits ?? {}) }),
+    ...(request.combine ? { combination: evaluateCombination(planner, request.combine) } : {}),
   };
 }
 

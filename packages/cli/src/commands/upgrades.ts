@@ -2,7 +2,15 @@
  * `hushmark upgrades NETWORK.json OPTIONS.json --source ID --receiver ID [--budget N] [--json]`:
  * each option alone, the best combination within the limits, and the cost–level frontier.
  */
-import { evaluateUpgrades, upgradeFlagSchema, type UpgradeReport, type SearchLimits, type UpgradeFlag } from "@hushmark/acoustics";
+import {
+  evaluateUpgrades,
+  upgradeFlagSchema,
+  type CombinationResult,
+  type SearchLimits,
+  type UpgradeFlag,
+  type UpgradeOption,
+  type UpgradeReport,
+} from "@hushmark/acoustics";
 import { numberOption, parseArgs, requiredOption, type ParsedArgs } from "../args.js";
 import { UsageError } from "../errors.js";
 import { dbText, jsonText, num, table } from "../format.js";
@@ -11,7 +19,7 @@ import type { Command } from "./command.js";
 
 const SPEC = {
   positionals: ["NETWORK.json", "OPTIONS.json"],
-  options: ["source", "receiver", "budget", "area", "labour", "allow-flags", ...TARGET_OPTIONS],
+  options: ["source", "receiver", "budget", "area", "labour", "allow-flags", "combine", ...TARGET_OPTIONS],
   flags: ["json"],
 };
 
@@ -35,6 +43,32 @@ function limitsFrom(args: ParsedArgs, file: SearchLimits): SearchLimits {
     ...(floorAreaM2 !== undefined ? { floorAreaM2 } : {}),
     ...(labourH !== undefined ? { labourH } : {}),
     ...(allowedFlags !== undefined ? { allowedFlags } : {}),
+  };
+}
+
+/** The option ids named by --combine (comma-separated), checked against the options file. */
+function combineIds(args: ParsedArgs, options: readonly UpgradeOption[]): string[] | undefined {
+  const raw = args.options.get("combine");
+  if (raw === undefined) return undefined;
+  const ids = raw.split(",").map((s) => s.trim()).filter((s) => s !== "");
+  const unknown = ids.filter((id) => !options.some((o) => o.id === id));
+  if (unknown.length > 0) throw new UsageError(`--combine: no option ${unknown.map((u) => `"${u}"`).join(", ")} in the options file`, "upgrades");
+  return ids;
+}
+
+function combinationJson(c: CombinationResult) {
+  return {
+    options: c.options,
+    levels_db: c.levelsDb.map((v) => num(v)),
+    dba: num(c.dba),
+    gain_db: num(c.gainDb),
+    nc: c.nc,
+    cost: num(c.cost),
+    labour_h: num(c.labourH),
+    floor_area_lost_m2: num(c.floorAreaLostM2, 3),
+    ...(c.shortfall ? { meets_target: c.shortfall.met, shortfall_db: num(c.shortfall.shortfallDb) } : {}),
+    flags: c.flags,
+    cautions: c.cautions.map((k) => k.text),
   };
 }
 
@@ -102,7 +136,7 @@ export const upgradesCommand: Command = {
   name: "upgrades",
   summary: "each upgrade option alone, the best combination within limits, and the cost–level frontier",
   usage:
-    "upgrades NETWORK.json OPTIONS.json --source ID --receiver ID [--budget N] [--area M2] [--labour H] [--allow-flags a,b] [--target-dba X | --target-nc N | --target-reduction DB] [--json]",
+    "upgrades NETWORK.json OPTIONS.json --source ID --receiver ID [--budget N] [--area M2] [--labour H] [--allow-flags a,b] [--combine id,id] [--target-dba X | --target-nc N | --target-reduction DB] [--json]",
   run(argv, io) {
     const args = parseArgs(argv, SPEC, "upgrades");
     const [netFile, optFile] = args.positionals as [string, string];
@@ -119,10 +153,18 @@ export const upgradesCommand: Command = {
     const limits = limitsFrom(args, fileLimits);
     const target = targetFromArgs(args, "upgrades") ?? set.target;
     const source = args.options.get("source");
-    const report = withNetworkErrors(netFile, () =>
-      evaluateUpgrades(network, set.options, { receiver, limits, ...(source !== undefined ? { source } : {}), ...(target ? { target } : {}) }),
-    );
-    io.stdout(args.flags.has("json") ? jsonText(upgradesJson(report)) : upgradesText(report, limits));
+    const combine = combineIds(args, set.options);
+    const request = { receiver, limits, ...(source !== undefined ? { source } : {}), ...(target ? { target } : {}), ...(combine ? { combine } : {}) };
+    const report = withNetworkErrors(netFile, () => evaluateUpgrades(network, set.options, request));
+    const combo = report.combination;
+    if (args.flags.has("json")) {
+      io.stdout(jsonText({ ...upgradesJson(report), ...(combo ? { combination: combinationJson(combo) } : {}) }));
+      return 0;
+    }
+    const extra = combo
+      ? `\nChosen combination ${combo.options.join(" + ")}: ${dbText(combo.dba)} dB(A) (−${combo.gainDb.toFixed(1)} dB), cost ${combo.cost.toFixed(0)}, labour ${combo.labourH.toFixed(1)} h\n`
+      : "";
+    io.stdout(upgradesText(report, limits) + extra);
     return 0;
   },
 };
