@@ -77,3 +77,4 @@ export type { CsvProblem, CsvResult } from "./catalogue/csv.js";
 export { constructionRatings, coveringDeltaLwDb } from "./catalogue/ratings.js";
 export { analysePlan, engineTarget } from "./analysis/analyse.js";
 export type { AnalysisRequest, AnalysisResult } from "./analysis/analyse.js";
+export { emptyPlan } from "./document/empty-plan.js";

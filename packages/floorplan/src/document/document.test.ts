@@ -64,3 +64,16 @@ describe("plan document", () => {
     expect(migratePlan(plan)).toEqual(plan);
   });
 });
+
+import { emptyPlan } from "./empty-plan.js";
+import { validatePlan } from "../validation/validate.js";
+import { constructionCatalogue } from "../catalogue/catalogue.js";
+
+describe("emptyPlan", () => {
+  it("is a valid plan with one level and defaults from the catalogue", () => {
+    const plan = emptyPlan({ id: "new-job", name: "New job", displayUnit: "imperial" });
+    expect(validatePlan(plan, constructionCatalogue)).toEqual([]);
+    expect(plan.elements["level-0"]).toMatchObject({ type: "level", heightM: 2.5 });
+    expect(parsePlan(serializePlan(plan)).ok).toBe(true);
+  });
+});
