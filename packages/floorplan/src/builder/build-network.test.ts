@@ -119,6 +119,12 @@ describe("buildNetwork", () => {
       "flank:A:Ab|B:Bd@end:A:Ac|0~B:Bc|0",
     ].sort());
     for (const l of flank) if (l.type === "flanking") expect(l.separating_area_m2).toBeCloseTo(12.5, 9);
+    const facade = flank.find((l) => l.id.includes("@start"));
+    if (!facade || facade.type !== "flanking") throw new Error("no façade path");
+    // Brick façade (exterior default) either side of a wood-stud party wall, meeting at a T.
+    expect(facade).toMatchObject({ junction: "t", path: "Ff", coupling_length_m: 2.5, mass_perpendicular_kg_m2: 23 });
+    expect(facade.element_i).toMatchObject({ ref: "A:Aa|0", mass_kg_m2: 190 });
+    expect(facade.element_i.area_m2).toBeCloseTo(4 * 2.5, 9);
   });
 
   it("refuses a plan with errors and returns its problems", () => {
