@@ -29,6 +29,7 @@ import { emptyPlanDocument, planDocumentCheck } from "./plans/plan-documents.js"
 import { createPlansService, type PlanDocumentCheck } from "./plans/plans.service.js";
 import { projectsRouter } from "./projects/projects.router.js";
 import { createProjectsService, type EmptyPlanFactory } from "./projects/projects.service.js";
+import { createMeasurementsModule, type MeasurementsModuleOptions } from "./measurements/measurements.module.js";
 
 export { loadConfig, type AppConfig } from "./config.js";
 export { createDataSource } from "./data-source.js";
@@ -45,6 +46,7 @@ export interface AppDeps {
   emptyPlan?: EmptyPlanFactory;
   checkPlan?: PlanDocumentCheck;
   analysisPool?: AnalysisPool;
+  measurements?: MeasurementsModuleOptions;
 }
 
 const PLAN_PUT = /^\/v1\/projects\/[^/]+\/plan$/;
@@ -100,6 +102,7 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
   const pool = deps.analysisPool ?? createAnalysisPool();
   const catalogue = createCatalogueService(dataSource);
   const analyses = createAnalysesService(dataSource, projects, catalogue, pool);
+  const media = createMeasurementsModule({ dataSource, config, logger, projects, options: deps.measurements });
   const perAddress = deps.accountLimitPerAddress ?? 30;
 
   const api = express.Router();
@@ -113,7 +116,7 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
     }),
   );
   api.use(peopleRouter(people, sessions, addressLimiter(dataSource, "accept", 15 * 60_000, perAddress)));
-  api.use(projectsRouter(projects, sessions, [...planRoutes(plans), ...analysisRoutes(analyses)]));
+  api.use(projectsRouter(projects, sessions, [...planRoutes(plans), ...analysisRoutes(analyses), ...media.routes]));
   api.use(catalogueRouter(catalogue, sessions));
   api.use(auditRouter(dataSource, sessions));
   api.use((req, _res, next) => next(new HttpError(404, "not_found", `There is no ${req.method} ${req.baseUrl}${req.path} in this API.`)));
@@ -125,6 +128,7 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
   const close = async () => {
     mailer.close();
     if (!deps.analysisPool) await pool.close();
+    await media.close();
   };
   return { app, mailer, close };
 }

@@ -24,6 +24,15 @@ const envSchema = z.object({
   HUSHMARK_LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
   HUSHMARK_ARGON2_MEMORY_KIB: z.coerce.number().int().min(8).default(19456),
   HUSHMARK_ARGON2_TIME_COST: z.coerce.number().int().min(1).default(2),
+  HUSHMARK_S3_ENDPOINT: z.string().url().optional(),
+  HUSHMARK_S3_REGION: z.string().default("us-east-1"),
+  HUSHMARK_S3_BUCKET: z.string().min(3).default("hushmark"),
+  HUSHMARK_S3_ACCESS_KEY: z.string().optional(),
+  HUSHMARK_S3_SECRET_KEY: z.string().optional(),
+  HUSHMARK_S3_FORCE_PATH_STYLE: z.enum(["true", "false", "1", "0", ""]).optional(),
+  HUSHMARK_MAX_RECORDING_MB: z.coerce.number().positive().default(2048),
+  HUSHMARK_MAX_PHOTO_MB: z.coerce.number().positive().default(15),
+  HUSHMARK_JOBS_SCHEMA: z.string().regex(/^[a-z_][a-z0-9_]*$/, "HUSHMARK_JOBS_SCHEMA must be a lower-case SQL name").default("pgboss"),
 });
 
 export interface AppConfig {
@@ -44,6 +53,12 @@ export interface AppConfig {
   accessTtlSeconds: number;
   /** Refresh-token lifetime in seconds. */
   refreshTtlSeconds: number;
+  /** Object storage (S3 or compatible); the local fake by default outside production. */
+  s3: { endpoint?: string; region: string; bucket: string; accessKeyId?: string; secretAccessKey?: string; forcePathStyle: boolean };
+  /** Upload limits in bytes. */
+  uploads: { maxRecordingBytes: number; maxPhotoBytes: number };
+  /** PostgreSQL schema of the job queue (pg-boss). */
+  jobsSchema: string;
 }
 
 /** Reads the configuration from the environment; throws a readable message for bad values. */
@@ -79,5 +94,25 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     argon2: { memoryCost: e.HUSHMARK_ARGON2_MEMORY_KIB, timeCost: e.HUSHMARK_ARGON2_TIME_COST, parallelism: 1 },
     accessTtlSeconds: 15 * 60,
     refreshTtlSeconds: 30 * 24 * 3600,
+    s3: s3Config(e),
+    uploads: { maxRecordingBytes: Math.round(e.HUSHMARK_MAX_RECORDING_MB * 1024 * 1024), maxPhotoBytes: Math.round(e.HUSHMARK_MAX_PHOTO_MB * 1024 * 1024) },
+    jobsSchema: e.HUSHMARK_JOBS_SCHEMA,
+  };
+}
+
+function s3Config(e: z.infer<typeof envSchema>): AppConfig["s3"] {
+  // Outside production the local fake (s3rver, any credentials) is the default store.
+  const local = e.NODE_ENV !== "production";
+  const endpoint = e.HUSHMARK_S3_ENDPOINT ?? (local ? "http://127.0.0.1:55027" : undefined);
+  const accessKeyId = e.HUSHMARK_S3_ACCESS_KEY ?? (local ? "S3RVER" : undefined);
+  const secretAccessKey = e.HUSHMARK_S3_SECRET_KEY ?? (local ? "S3RVER" : undefined);
+  const pathStyle = e.HUSHMARK_S3_FORCE_PATH_STYLE;
+  return {
+    ...(endpoint ? { endpoint: endpoint.replace(/\/$/, "") } : {}),
+    region: e.HUSHMARK_S3_REGION,
+    bucket: e.HUSHMARK_S3_BUCKET,
+    ...(accessKeyId ? { accessKeyId } : {}),
+    ...(secretAccessKey ? { secretAccessKey } : {}),
+    forcePathStyle: pathStyle === undefined || pathStyle === "" ? Boolean(endpoint) : pathStyle === "true" || pathStyle === "1",
   };
 }

@@ -34,7 +34,7 @@ export async function startHarness(overrides: Partial<AppDeps> = {}): Promise<Ha
   const { app, close } = createApp({
     dataSource,
     config,
-    logger: pino({ level: "silent" }),
+    logger: pino({ level: process.env.HUSHMARK_TEST_LOG_LEVEL ?? "silent" }),
     signInLimits: { windowMs: 60_000, perAddress: 100_000, perAccountAndAddress: 100_000, perAccount: 100_000 },
     accountLimitPerAddress: 100_000,
     ...overrides,

@@ -1,4 +1,4 @@
-import { parseNetwork, solveNetwork, type Target as EngineTarget } from "@hushmark/acoustics";
+import { parseNetwork, solveNetwork, type Network, type Target as EngineTarget } from "@hushmark/acoustics";
 import {
   BANDS_HZ, buildNetwork, catalogueWith, constructionCatalogue, mapResultToPlan, OUTDOORS_ID, parsePlan, sourceSpectrum,
   type Catalogue, type Construction, type Plan, type Problem,
@@ -22,14 +22,14 @@ const problemDto = (p: Problem): PlanProblem => ({
   ...(p.suggestion ? { suggestion: p.suggestion } : {}),
 });
 
-function engineTarget(target: AnalysisTarget | undefined): EngineTarget | undefined {
+export function engineTarget(target: AnalysisTarget | undefined): EngineTarget | undefined {
   if (!target) return undefined;
   if (target.kind === "nc") return { kind: "nc", nc: Math.min(70, Math.max(15, target.nc)) };
   if (target.kind === "dba") return { kind: "level", dba: target.dba };
   return { kind: "reduction", db: target.reductionDb };
 }
 
-function spaceName(plan: Plan, id: string): string {
+export function spaceName(plan: Plan, id: string): string {
   if (id === OUTDOORS_ID) return "Outdoors";
   const el = plan.elements[id] as { name?: string } | undefined;
   return el?.name || id;
@@ -53,36 +53,51 @@ export function computeAnalysisWith(document: unknown, request: ParsedAnalysisRe
   return analyse(document, request, firmConstructions.length ? catalogueWith(constructionCatalogue, { constructions: firmConstructions }) : constructionCatalogue);
 }
 
-function analyse(document: unknown, request: ParsedAnalysisRequest, catalogue: Catalogue): AnalysisOutcome {
+/** The plan built into a parsed network for a request, or why it cannot be. */
+export type PreparedNetwork =
+  | { ok: true; plan: Plan; built: Extract<ReturnType<typeof buildNetwork>, { ok: true }>; network: Network; sourceId: string }
+  | Extract<AnalysisOutcome, { ok: false }>;
+
+/** Parses the plan, builds its network with the request's source and checks the spaces; shared by analyses and scenarios. */
+export function prepareNetwork(document: unknown, request: Pick<ParsedAnalysisRequest, "source" | "receiverId">, catalogue: Catalogue): PreparedNetwork {
   const parsed = parsePlan(document);
   if (!parsed.ok) {
-    return failure(422, "plan_problems", "The saved plan is not a valid plan document.", parsed.problems.slice(0, 50).map(problemDto));
+    return failure(422, "plan_problems", "The saved plan is not a valid plan document.", parsed.problems.slice(0, 50).map(problemDto)) as Extract<AnalysisOutcome, { ok: false }>;
   }
   const plan = parsed.plan;
   const source = request.source;
   let sources: NonNullable<Parameters<typeof buildNetwork>[2]>["sources"];
   let sourceId: string;
+  const fail = (status: 400 | 422, code: string, message: string, problems: PlanProblem[] = []) => failure(status, code, message, problems) as Extract<AnalysisOutcome, { ok: false }>;
   if (source.kind === "airborne") {
     const levels = source.spectrum.kind === "library" ? sourceSpectrum(source.spectrum.id)?.levelsDb : source.spectrum.levelsDb;
-    if (!levels) return failure(400, "invalid_input", `There is no source spectrum "${source.spectrum.kind === "library" ? source.spectrum.id : ""}" in the library.`, []);
+    if (!levels) return fail(400, "invalid_input", `There is no source spectrum "${source.spectrum.kind === "library" ? source.spectrum.id : ""}" in the library.`, []);
     sources = [{ type: "airborne", spaceId: source.spaceId, levelsDb: [...levels] }];
     sourceId = source.spaceId;
   } else {
     sources = [{ type: "impact", roomId: source.roomId }];
     sourceId = source.roomId;
   }
-  if (sourceId === request.receiverId) return failure(400, "invalid_input", "The source and the receiver are the same space; pick two different ones.");
+  if (sourceId === request.receiverId) return fail(400, "invalid_input", "The source and the receiver are the same space; pick two different ones.");
   const built = buildNetwork(plan, catalogue, { sources });
   if (!built.ok) {
-    return failure(422, "plan_problems", "The plan has problems to fix before it can be analysed.", built.problems.filter((p) => p.severity === "error").map(problemDto));
+    return fail(422, "plan_problems", "The plan has problems to fix before it can be analysed.", built.problems.filter((p) => p.severity === "error").map(problemDto));
   }
   const spaceIds = new Set(built.network.spaces.map((s) => s.id));
-  if (!spaceIds.has(request.receiverId)) return failure(400, "invalid_input", `"${request.receiverId}" is not a room or space of this plan.`);
-  if (source.kind === "airborne" && !spaceIds.has(source.spaceId)) return failure(400, "invalid_input", `"${source.spaceId}" is not a room or space of this plan.`);
+  if (!spaceIds.has(request.receiverId)) return fail(400, "invalid_input", `"${request.receiverId}" is not a room or space of this plan.`);
+  if (source.kind === "airborne" && !spaceIds.has(source.spaceId)) return fail(400, "invalid_input", `"${source.spaceId}" is not a room or space of this plan.`);
   const network = parseNetwork(built.network);
   if (!network.ok) {
-    return failure(422, "plan_problems", "The plan produced a network the engine cannot read.", network.issues.slice(0, 20).map((i) => ({ code: "network", severity: "error", elementId: null, message: `${i.path}: ${i.message}` })));
+    return fail(422, "plan_problems", "The plan produced a network the engine cannot read.", network.issues.slice(0, 20).map((i) => ({ code: "network", severity: "error", elementId: null, message: `${i.path}: ${i.message}` })));
   }
+  return { ok: true, plan, built, network: network.value, sourceId };
+}
+
+function analyse(document: unknown, request: ParsedAnalysisRequest, catalogue: Catalogue): AnalysisOutcome {
+  const prepared = prepareNetwork(document, request, catalogue);
+  if (!prepared.ok) return prepared;
+  const { plan, built, sourceId } = prepared;
+  const network = { value: prepared.network };
   const target = engineTarget(request.target);
   const solved = solveNetwork(network.value, { receiver: request.receiverId, k: request.paths, gains: 20, ...(target ? { target } : {}) });
   const onPlan = mapResultToPlan(plan, built, solved);

@@ -12,6 +12,10 @@ import { Project } from "./project.entity.js";
 import { RateLimitBucket } from "./rate-limit-bucket.entity.js";
 import { Session } from "./session.entity.js";
 import { User } from "./user.entity.js";
+import { ProjectBrief } from "../intake/project-brief.entity.js";
+import { StoredFile } from "../files/stored-file.entity.js";
+import { Measurement } from "../measurements/measurement.entity.js";
+import { Photo } from "../measurements/photo.entity.js";
 
 export {
   AnalysisCache, AuditEvent, FirmConstruction, Invitation, Membership, Organization, PasswordReset, Plan, PlanRevision, Project, ProjectClient, RateLimitBucket, Session, User,
@@ -20,5 +24,5 @@ export {
 /** Every entity, for the DataSource. */
 export const entities = [
   Organization, User, Membership, Project, ProjectClient, Plan, PlanRevision, AuditEvent, Session, Invitation, PasswordReset, RateLimitBucket,
-  AnalysisCache, FirmConstruction,
+  AnalysisCache, FirmConstruction, ProjectBrief, StoredFile, Measurement, Photo,
 ];

@@ -19,7 +19,10 @@ export function csrfGuard(allowedOrigins: string[]): RequestHandler {
     if (origin === "null") return next(new HttpError(403, "cross_site_request", "This request came from another site and was refused."));
     const length = Number(req.get("content-length") ?? "0");
     const hasBody = length > 0 || req.get("transfer-encoding") !== undefined;
-    if (hasBody && !req.is("application/json")) {
+    // File uploads are multipart; they must carry our own header, which a cross-site form cannot set
+    // and a cross-site script can only send after a CORS preflight we never grant.
+    const upload = req.is("multipart/form-data") && req.get("x-hushmark-upload") === "1";
+    if (hasBody && !req.is("application/json") && !upload) {
       return next(new HttpError(415, "unsupported_media_type", "Send the request body as JSON (Content-Type: application/json)."));
     }
     next();

@@ -26,6 +26,17 @@ export function fieldIssues(error: ZodError): { path: string; message: string }[
   return error.issues.map((issue) => ({ path: issue.path.map(String).join(".") || "(body)", message: issue.message }));
 }
 
+/** SQLSTATE classes and driver messages that mean the database went away, not that the request was wrong. */
+const UNAVAILABLE_CODES = new Set(["57P01", "57P02", "57P03", "08000", "08003", "08006", "08001", "08004", "ECONNREFUSED", "ECONNRESET"]);
+
+function isDatabaseUnavailable(error: unknown): boolean {
+  const e = error as { code?: string; driverError?: { code?: string; message?: string }; message?: string };
+  const code = e.driverError?.code ?? e.code;
+  if (code && UNAVAILABLE_CODES.has(code)) return true;
+  const message = `${e.driverError?.message ?? ""} ${e.message ?? ""}`;
+  return /Connection terminated|connection timeout|terminating connection|Client has encountered a connection error/i.test(message);
+}
+
 interface BodyParserError extends Error {
   type?: string;
   status?: number;
@@ -55,6 +66,11 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     }
     if (parserError.status && parserError.status >= 400 && parserError.status < 500) {
       res.status(parserError.status).json({ error: { code: "bad_request", message: parserError.message } });
+      return;
+    }
+    if (isDatabaseUnavailable(error)) {
+      logger.warn({ err: error, url: req.originalUrl }, "database unavailable");
+      res.status(503).set("Retry-After", "2").json({ error: { code: "database_unavailable", message: "The database connection dropped, so nothing was saved. Please try again in a moment." } });
       return;
     }
     logger.error({ err: error, url: req.originalUrl, method: req.method }, "unhandled error");

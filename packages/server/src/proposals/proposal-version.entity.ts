@@ -1,0 +1,41 @@
+import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryColumn } from "typeorm";
+import { ProposalRow } from "./proposal.entity.js";
+
+/** One version of a proposal: a frozen copy of what the client reads, and its PDF once rendered. */
+@Entity({ name: "proposal_versions" })
+export class ProposalVersionRow {
+  @PrimaryColumn({ type: "uuid", name: "proposal_id" })
+  proposalId!: string;
+
+  @ManyToOne(() => ProposalRow, { onDelete: "CASCADE" })
+  @JoinColumn({ name: "proposal_id" })
+  proposal?: ProposalRow;
+
+  @PrimaryColumn({ type: "integer", name: "version" })
+  version!: number;
+
+  @Column({ type: "jsonb", name: "content" })
+  content!: Record<string, unknown>;
+
+  /** The plan document the proposal was made on (the PDF draws it). */
+  @Column({ type: "jsonb", name: "plan_document" })
+  planDocument!: Record<string, unknown>;
+
+  @Column({ type: "timestamptz", name: "sent_at", nullable: true })
+  sentAt!: Date | null;
+
+  @Column({ type: "uuid", name: "sent_by", nullable: true })
+  sentById!: string | null;
+
+  @Column({ type: "varchar", length: 10, name: "pdf_status", default: "pending" })
+  pdfStatus!: string;
+
+  @Column({ type: "bytea", name: "pdf", nullable: true, select: false })
+  pdf!: Buffer | null;
+
+  @Column({ type: "text", name: "pdf_error", nullable: true })
+  pdfError!: string | null;
+
+  @CreateDateColumn({ type: "timestamptz", name: "created_at" })
+  createdAt!: Date;
+}
