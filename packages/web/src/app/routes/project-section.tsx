@@ -9,6 +9,7 @@ import { can } from "../../lib/permissions";
 import { PageLoading } from "../../components/ui/spinner";
 
 const SketchSection = lazy(() => import("../../features/editor/sketch-section"));
+const PathsSection = lazy(() => import("../../features/paths/paths-section"));
 
 export function ProjectSectionRoute({ section }: { section: ProjectSection }) {
   const { projectId = "" } = useParams();
@@ -22,6 +23,14 @@ export function ProjectSectionRoute({ section }: { section: ProjectSection }) {
     return (
       <Suspense fallback={<PageLoading label="Opening the plan" />}>
         <SketchSection projectId={projectId} />
+      </Suspense>
+    );
+  }
+
+  if (section.slug === "paths") {
+    return (
+      <Suspense fallback={<PageLoading label="Opening the plan" />}>
+        <PathsSection projectId={projectId} />
       </Suspense>
     );
   }

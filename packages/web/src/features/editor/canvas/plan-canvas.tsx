@@ -80,12 +80,13 @@ export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function
             {ghostLevelId ? <ElementsGroup plan={plan} levelId={ghostLevelId} ghost /> : null}
             <ElementsGroup plan={plan} levelId={levelId} />
           </Group>
-          <Group x={v.ox} y={v.oy}>
-            <LabelsGroup plan={plan} levelId={levelId} scale={v.scale} unit={plan.displayUnit} />
-          </Group>
         </Layer>
         <Layer listening={false}>
           <Group x={v.ox} y={v.oy} scaleX={v.scale} scaleY={-v.scale}>{overlay}</Group>
+          {/* Names stay above the analysis colours so they can always be read. */}
+          <Group x={v.ox} y={v.oy}>
+            <LabelsGroup plan={plan} levelId={levelId} scale={v.scale} unit={plan.displayUnit} />
+          </Group>
           {overlayLabels}
         </Layer>
         <Layer listening={false}>

@@ -1,0 +1,84 @@
+import { memo } from "react";
+import { Arrow, Circle, Group, Label, Line, Rect, Tag, Text } from "react-konva";
+import type { AnalysisResult } from "@hushmark/schemas";
+import type { Plan } from "@hushmark/floorplan";
+import { levelOf } from "@hushmark/editor-core";
+import { openingSpan, wallBands } from "../../editor/model/wall-geometry";
+import { toScreen, type Viewport } from "../../editor/model/viewport";
+import { shareColour } from "../model/share-scale";
+import { ink, panel } from "../../editor/canvas/colours";
+
+type Elements = AnalysisResult["elements"];
+
+/** A rectangle round the segment ab, `half` either side (m), as a flat point list. */
+function bandOutline(a: { x: number; y: number }, b: { x: number; y: number }, half: number): number[] {
+  const l = Math.hypot(b.x - a.x, b.y - a.y) || 1;
+  const nx = (-(b.y - a.y) / l) * half, ny = ((b.x - a.x) / l) * half;
+  return [a.x + nx, a.y + ny, b.x + nx, b.y + ny, b.x - nx, b.y - ny, a.x - nx, a.y - ny];
+}
+
+/** Each wall part, opening, grille and duct coloured by its share of the energy at the receiver (plan metres). */
+export const ShareOverlay = memo(function ShareOverlay({ plan, levelId, elements, scale, dimmed }: { plan: Plan; levelId: string; elements: Elements; scale: number; dimmed: boolean }) {
+  const bands = new Map(wallBands(plan).map((b) => [b.id, b]));
+  const minW = 7 / scale;
+  return (
+    <Group listening={false} opacity={dimmed ? 0.35 : 1}>
+      {[...elements].sort((a, b) => Number(b.elementId.includes("^")) - Number(a.elementId.includes("^"))).map((r) => {
+        const colour = shareColour(r.share);
+        const band = bands.get(r.elementId);
+        if (band) {
+          if (band.levelId !== levelId) return null;
+          return <Line key={r.elementId} points={bandOutline(band.start, band.end, Math.max(band.thicknessM, minW) / 2)} closed fill={colour} stroke={ink} strokeWidth={1} strokeScaleEnabled={false} />;
+        }
+        if (r.elementId.includes("^")) {
+          // A floor or ceiling: tint the room it belongs to on this level, inset so its walls stay readable.
+          const room = r.elementId.split("^").map((id) => plan.elements[id]).find((e) => e?.type === "room" && e.levelId === levelId);
+          if (room?.type !== "room") return null;
+          return <Line key={r.elementId} points={room.outline.flatMap((p) => [p.x, p.y])} closed fill={colour} opacity={0.4} listening={false} />;
+        }
+        const el = plan.elements[r.elementId];
+        if (!el) return null;
+        if (el.type === "door" || el.type === "window" || el.type === "penetration") {
+          const span = openingSpan(plan, el);
+          if (!span || span.levelId !== levelId) return null;
+          return <Line key={r.elementId} points={bandOutline(span.start, span.end, Math.max(span.thicknessM * 0.8, minW * 0.9))} closed fill={colour} stroke={ink} strokeWidth={1.5} strokeScaleEnabled={false} />;
+        }
+        if (el.type === "vent" && levelOf(plan, el.id) === levelId) {
+          return <Rect key={r.elementId} x={el.position.x - 0.2} y={el.position.y - 0.2} width={0.4} height={0.4} fill={colour} stroke={ink} strokeWidth={1} strokeScaleEnabled={false} />;
+        }
+        if (el.type === "duct") {
+          const a = plan.elements[el.fromVentId], b = plan.elements[el.toVentId];
+          if (a?.type !== "vent" || b?.type !== "vent") return null;
+          return <Line key={r.elementId} points={[a.position.x, a.position.y, b.position.x, b.position.y]} stroke={colour} strokeWidth={Math.max(0.15, minW)} />;
+        }
+        return null;
+      })}
+    </Group>
+  );
+});
+
+/** The weakest paths drawn through the elements they cross, numbered, with their level (screen pixels). */
+export function PathLines({ result, levelId, v, dimmed, highlight }: { result: AnalysisResult; levelId: string; v: Viewport; dimmed: boolean; highlight: number | null }) {
+  return (
+    <Group listening={false} opacity={dimmed ? 0.35 : 1}>
+      {result.paths.slice(0, 3).map((p) => {
+        const pts = p.polyline.filter((q) => q.levelId === levelId || q.levelId === null).map((q) => toScreen(v, q.x, q.y));
+        if (pts.length < 2) return null;
+        const flat = pts.flatMap((q) => [q.x, q.y]);
+        const mid = pts[Math.floor(pts.length / 2)]!;
+        const strong = highlight === null || highlight === p.rank;
+        return (
+          <Group key={p.rank} opacity={strong ? 1 : 0.3}>
+            <Arrow points={flat} stroke={panel} strokeWidth={6} pointerLength={10} pointerWidth={10} fill={panel} tension={0.2} />
+            <Arrow points={flat} stroke={ink} strokeWidth={2.5} dash={p.rank === 1 ? undefined : [8, 5]} pointerLength={9} pointerWidth={9} fill={ink} tension={0.2} />
+            <Circle x={pts[0]!.x} y={pts[0]!.y} radius={4} fill={ink} />
+            <Label x={mid.x + 6} y={mid.y - 24}>
+              <Tag fill={ink} cornerRadius={10} />
+              <Text text={`${p.rank}  ${p.dba.toFixed(0)} dBA`} fontFamily="Work Sans" fontSize={12} fontStyle="600" fill={panel} padding={5} />
+            </Label>
+          </Group>
+        );
+      })}
+    </Group>
+  );
+}

@@ -1,0 +1,169 @@
+import { useEffect, useMemo, useRef, useState } from "react";
+import { useQueryClient } from "@tanstack/react-query";
+import { EditorStore, InspectTool, boundsOfMany, planBounds, setLeaks, type ToolEnv } from "@hushmark/editor-core";
+import { levelsByElevation, planWallPieces, type Leaks } from "@hushmark/floorplan";
+import type { AnalysisRequest, PlanResponse } from "@hushmark/schemas";
+import { PlanCanvas } from "../../editor/canvas/plan-canvas";
+import { fitBounds, type Viewport } from "../../editor/model/viewport";
+import { openPlan } from "../../editor/model/open-plan";
+import { useElementSize, useFillHeight } from "../../editor/hooks/use-element-size";
+import { usePlan, useSelection } from "../../editor/hooks/use-store-value";
+import { savePlan } from "../../editor/api/save-plan";
+import { ExportMenu } from "../../editor/components/export-menu";
+import { projectKeys } from "../../projects/api/keys";
+import { isApiError } from "../../../lib/api-client";
+import { useAnalysis } from "../api/run-analysis";
+import { SHARE_LEGEND, shareColour } from "../model/share-scale";
+import { AnalysisInputs, defaultInputs, type PathInputs } from "./analysis-inputs";
+import { ShareOverlay, PathLines } from "./analysis-overlay";
+import { ResultSummary, PathsList } from "./result-summary";
+import { SpectrumChart } from "./spectrum-chart";
+import { WeakLinksList } from "./weak-links-list";
+import { LeakQuickEdit } from "./leak-quick-edit";
+import { PathCautions } from "./path-cautions";
+
+function toRequest(version: number, i: PathInputs): AnalysisRequest {
+  return {
+    planVersion: version,
+    source: i.sourceKind === "impact" ? { kind: "impact", roomId: i.sourceId } : { kind: "airborne", spaceId: i.sourceId, spectrum: { kind: "library", id: i.spectrumId } },
+    receiverId: i.receiverId,
+    ...(i.target ? { target: i.target } : {}),
+    paths: 5,
+  };
+}
+
+/** The Paths section: pick source and receiver, see the plan marked up by where the sound gets through. */
+export function PathsScreen({ projectId, response, title, plain, canEdit }: { projectId: string; response: PlanResponse; title: string; plain: boolean; canEdit: boolean }) {
+  const queryClient = useQueryClient();
+  const [store] = useState(() => new EditorStore(openPlan(response.document, projectId, title).plan));
+  const [version, setVersion] = useState(response.version);
+  const plan = usePlan(store);
+  const selection = useSelection(store);
+  const [inputs, setInputs] = useState<PathInputs | null>(() => defaultInputs(store.plan));
+  const levels = levelsByElevation(plan);
+  const [levelId, setLevelId] = useState(() => levels.find((l) => l.elevationM >= 0)?.id ?? levels[0]?.id ?? "ground");
+  const [viewport, setViewport] = useState<Viewport>({ scale: 40, ox: 100, oy: 400 });
+  const [highlight, setHighlight] = useState<number | null>(null);
+  const [saving, setSaving] = useState(false);
+  const [saveError, setSaveError] = useState<string | null>(null);
+  const canvas = useElementSize<HTMLDivElement>();
+  const frame = useFillHeight<HTMLDivElement>(560);
+  const fitted = useRef(false);
+  useEffect(() => {
+    if (!fitted.current && canvas.width > 0) { fitted.current = true; setViewport(fitBounds(planBounds(store.plan, levelId), canvas.width, canvas.height)); }
+  }, [canvas.width, canvas.height, store, levelId]);
+
+  const request = useMemo(() => (inputs ? toRequest(version, inputs) : null), [inputs, version]);
+  const analysis = useAnalysis(projectId, request);
+  const result = analysis.data;
+  const recomputing = analysis.isFetching;
+  const stale = analysis.isPlaceholderData || recomputing;
+
+  const envRef = useRef<ToolEnv>({ store, levelId, unit: plan.displayUnit, gridM: 0, toleranceM: 0.2 });
+  Object.assign(envRef.current, { levelId, toleranceM: 12 / viewport.scale, pan: (d: { x: number; y: number }) => setViewport((v) => ({ ...v, ox: v.ox + d.x * v.scale, oy: v.oy - d.y * v.scale })) });
+  const [tool] = useState(() => new InspectTool(envRef.current));
+
+  const selected = selection[0] ?? null;
+  const selectedEl = selected ? plan.elements[selected] : undefined;
+
+  const zoomTo = (id: string) => {
+    store.select([id]);
+    const piece = planWallPieces(store.plan).find((p) => p.id === id);
+    const b = piece ? { minX: Math.min(piece.start.x, piece.end.x), maxX: Math.max(piece.start.x, piece.end.x), minY: Math.min(piece.start.y, piece.end.y), maxY: Math.max(piece.start.y, piece.end.y) } : boundsOfMany(store.plan, [id]);
+    const lvl = piece?.levelId ?? (selectedEl && "levelId" in selectedEl ? selectedEl.levelId : undefined);
+    if (lvl && lvl !== levelId) setLevelId(lvl);
+    if (b) setViewport(fitBounds({ minX: b.minX - 2, maxX: b.maxX + 2, minY: b.minY - 2, maxY: b.maxY + 2 }, canvas.width, canvas.height, 60));
+  };
+
+  const changeLeaks = async (id: string, leaks: Partial<Leaks>) => {
+    setSaving(true);
+    setSaveError(null);
+    const before = store.plan;
+    store.run(setLeaks(id, leaks));
+    try {
+      const saved = await savePlan(projectId, store.plan, version, "Leak changed in the Paths view");
+      queryClient.setQueryData(projectKeys.plan(projectId), saved);
+      setVersion(saved.version);
+    } catch (e) {
+      store.load(before, { keepHistory: true });
+      setSaveError(isApiError(e) && e.status === 409 ? "The plan was changed elsewhere; reload the page to see the latest version." : isApiError(e) ? e.message : "The change was not saved.");
+    } finally {
+      setSaving(false);
+    }
+  };
+
+  const problems = isApiError(analysis.error) && analysis.error.status === 422 ? (analysis.error.details as Array<{ message: string; elementId?: string | null }> | undefined) ?? [] : null;
+  const markup = result ? { colours: Object.fromEntries(result.elements.map((e) => [e.elementId, shareColour(e.share)])), legend: SHARE_LEGEND, subtitle: `${result.source.name} → ${result.receiver.name}: ${result.receiver.dba.toFixed(0)} dBA` } : undefined;
+
+  if (!inputs) return <p className="rounded-lg border border-rule bg-panel p-6 text-[15px]">Draw at least two rooms in Sketch to see where the sound gets through.</p>;
+
+  return (
+    <div ref={frame.ref} className="flex flex-col overflow-hidden rounded-lg border border-rule bg-panel" style={{ height: frame.height }}>
+      <div className="border-b border-rule p-2">
+        <AnalysisInputs plan={plan} inputs={inputs} onChange={setInputs} plain={plain} />
+      </div>
+      <div className="flex min-h-0 flex-1 flex-col lg:flex-row">
+        <div className="relative flex min-h-0 min-w-0 flex-1 flex-col">
+          <div className="flex items-center gap-2 border-b border-rule px-2 py-1">
+            <label className="sr-only" htmlFor="paths-level">Level</label>
+            <select id="paths-level" value={levelId} onChange={(e) => setLevelId(e.target.value)} className="min-h-9 rounded-md border border-rule bg-panel px-2 text-[14px]">
+              {levels.map((l) => <option key={l.id} value={l.id}>{l.name}</option>)}
+            </select>
+            <button type="button" className="min-h-9 rounded-md px-2 text-[14px] hover:bg-ink/5" onClick={() => setViewport(fitBounds(planBounds(store.plan, levelId), canvas.width, canvas.height))}>Fit to plan</button>
+            {recomputing ? <span role="status" className="inline-flex items-center gap-1.5 text-[13px] font-medium text-caution" data-testid="recomputing"><span className="h-2 w-2 animate-pulse rounded-full bg-caution" aria-hidden="true" /> Recomputing…</span> : null}
+            <div className="ml-auto"><ExportMenu plan={plan} levelId={levelId} title={title} {...(markup ? { markup } : {})} /></div>
+          </div>
+          <div ref={canvas.ref} className="relative min-h-0 flex-1">
+            <PlanCanvas
+              plan={plan}
+              levelId={levelId}
+              selection={selection}
+              problems={[]}
+              viewport={viewport}
+              setViewport={setViewport}
+              width={canvas.width}
+              height={canvas.height}
+              tool={tool}
+              label={`Marked-up plan of ${title}: elements coloured by their share of the sound reaching ${result?.receiver.name ?? "the room"}. The list beside it gives the same information.`}
+              cursor="grab"
+              overlay={result ? <ShareOverlay plan={plan} levelId={levelId} elements={result.elements} scale={viewport.scale} dimmed={stale} /> : null}
+              overlayLabels={result ? <PathLines result={result} levelId={levelId} v={viewport} dimmed={stale} highlight={highlight} /> : null}
+            />
+            <div className="pointer-events-none absolute bottom-2 left-2 right-2 flex flex-wrap items-center gap-x-3 gap-y-1 rounded-md border border-rule bg-panel/95 px-2 py-1 text-[12px] shadow-sm" aria-label="Colour legend">
+              <p className="font-semibold">{plain ? "Share of what you hear" : "Share of the sound reaching the room"}</p>
+              <ul className="flex flex-wrap gap-x-3 gap-y-0.5">
+                {SHARE_LEGEND.map((l) => <li key={l.label} className="flex items-center gap-1.5"><span className="inline-block h-3 w-4 rounded-sm border border-rule" style={{ background: l.colour }} aria-hidden="true" />{l.label}</li>)}
+              </ul>
+            </div>
+          </div>
+        </div>
+        <aside aria-label="Results" className="flex max-h-[45%] min-h-0 flex-col gap-4 overflow-y-auto border-t border-rule p-3 lg:max-h-none lg:w-[360px] lg:border-l lg:border-t-0">
+          {analysis.isPending && !result ? <p role="status" className="text-sm text-muted">Working out where the sound gets through…</p> : null}
+          {problems ? (
+            <div role="alert" className="rounded-md border border-danger/40 bg-danger/5 p-3 text-sm">
+              <p className="font-semibold text-danger">The plan needs fixing before it can be analysed.</p>
+              <ul className="mt-1 list-disc pl-5">{problems.slice(0, 6).map((p, i) => <li key={i}>{p.message}</li>)}</ul>
+            </div>
+          ) : analysis.isError ? <p role="alert" className="text-sm text-danger">{isApiError(analysis.error) ? analysis.error.message : "The analysis did not run."}</p> : null}
+          {result ? (
+            <>
+              <ResultSummary result={result} plain={plain} />
+              <SpectrumChart result={result} dimmed={stale} />
+              <WeakLinksList result={result} selected={selected} onPick={zoomTo} plain={plain} dimmed={stale} />
+              {canEdit && (selectedEl?.type === "door" || selectedEl?.type === "window") ? <LeakQuickEdit el={selectedEl} busy={saving} onLeaks={(l) => void changeLeaks(selectedEl.id, l)} /> : null}
+              {saveError ? <p role="alert" className="text-sm text-danger">{saveError}</p> : null}
+              <PathsList result={result} highlight={highlight} onHighlight={setHighlight} />
+              <PathCautions plan={plan} result={result} />
+              {result.assumptions.length && !plain ? (
+                <details className="text-[13px]">
+                  <summary className="cursor-pointer font-medium">Assumptions ({result.assumptions.length})</summary>
+                  <ul className="mt-1 list-disc pl-5 text-muted">{result.assumptions.map((a, i) => <li key={i}>{a.message}</li>)}</ul>
+                </details>
+              ) : null}
+            </>
+          ) : null}
+        </aside>
+      </div>
+    </div>
+  );
+}
