@@ -74,3 +74,29 @@ export function syntheticBuilding(n: number, seed = 1): Building {
     linkIds: links.map((l) => l.id),
   };
 }
+
+/**
+ * The building with `count` extra links of comparable strength between the source's space and the
+ * receiver (walls with doors, vents, flanking paths), so that many upgrade options matter at once:
+ * the hard case for the upgrade search.
+ */
+export function withParallelPaths(b: Building, count: number, seed = 3): Building {
+  const rnd = seededRandom(seed);
+  const net = b.network;
+  const from = net.sources?.[0];
+  const a = from && "space" in from ? from.space : "r0";
+  const links = [...(net.links ?? [])];
+  for (let i = 0; i < count; i++) {
+    const id = `p${i}`;
+    const kind = i % 3;
+    if (kind === 0) {
+      links.push({ id, between: [a, b.receiver], parts: [{ id: "wall", kind: "wall", area_m2: 3, tl_db: rising(32 + 6 * rnd(), 1) }, { id: "gap", kind: "gap", area_m2: 0.0005 + 0.001 * rnd(), open: true }] } as never);
+    } else if (kind === 1) {
+      links.push({ id, type: "vent", between: [a, b.receiver], open_area_m2: 0.01, attenuation_db: rising(14 + 6 * rnd(), 0.3) } as never);
+    } else {
+      const el = { tl_db: rising(30 + 6 * rnd(), 1), area_m2: 10, mass_kg_m2: 120 };
+      links.push({ id, type: "flanking", between: [a, b.receiver], junction: "t", element_i: el, element_j: el, mass_perpendicular_kg_m2: 150, coupling_length_m: 3, separating_area_m2: 10, kij_db: 2 } as never);
+    }
+  }
+  return { ...b, network: { ...net, links }, linkIds: links.map((l) => l.id) };
+}
