@@ -112,7 +112,7 @@ describe("solve", () => {
     cross.links[0].parts[0].tl_db = [1, 2];
     cross.links[1].between[0] = "kitchen";
     const o = await hushmark(["solve", "n.json", "--receiver", "studio"], { "n.json": JSON.stringify(cross) });
-    expectInputError(o, /2 problems in the network/, /n\.json: \$\.links\[0\]\.parts\[0\]\.tl_db: tl_db has 2 values/, /\$\.links\[1\]\.between\[0\]: link "cafe-tiles" names unknown space "kitchen"/);
+    expectInputError(o, /2 problems in the network/, /n\.json: \$\.links\[0\]\.parts\[0\]\.tl_db: has 2 values/, /\$\.links\[1\]\.between\[0\]: link "cafe-tiles" names unknown space "kitchen"/);
   });
   it("names unknown sources and receivers and impossible balances", async () => {
     expectInputError(await hushmark(["solve", "net.json", "--receiver", "attic"], files()), /net\.json: no space "attic"/);

@@ -15,9 +15,9 @@ interface Checker {
   issue(path: Path, message: string): void;
 }
 
-function checkBandArray(c: Checker, value: unknown, path: Path, what: string): void {
+function checkBandArray(c: Checker, value: unknown, path: Path): void {
   if (Array.isArray(value) && value.length !== c.bands) {
-    c.issue(path, `${what} has ${value.length} values; the network has ${c.bands} bands`);
+    c.issue(path, `has ${value.length} values; the network has ${c.bands} bands`);
   }
 }
 
@@ -35,8 +35,8 @@ function checkSpaces(c: Checker, net: NetworkShape): void {
   checkUnique(c, net.spaces.map((s) => s.id), (i) => ["spaces", i, "id"], "space");
   net.spaces.forEach((s, i) => {
     const at: Path = ["spaces", i];
-    checkBandArray(c, s.absorption_m2, [...at, "absorption_m2"], "absorption_m2");
-    checkBandArray(c, s.rt60_s, [...at, "rt60_s"], "rt60_s");
+    checkBandArray(c, s.absorption_m2, [...at, "absorption_m2"]);
+    checkBandArray(c, s.rt60_s, [...at, "rt60_s"]);
     if (s.kind === "outdoors") return;
     const hasA = s.absorption_m2 !== undefined;
     const hasT = s.rt60_s !== undefined;
@@ -54,8 +54,8 @@ function checkPartitionParts(c: Checker, net: NetworkShape, i: number): void {
   checkUnique(c, link.parts.map((p) => p.id), (k) => ["links", i, "parts", k, "id"], "part");
   link.parts.forEach((p, k) => {
     const at: Path = ["links", i, "parts", k];
-    if ("tl_db" in p) checkBandArray(c, p.tl_db, [...at, "tl_db"], "tl_db");
-    if ("dne_db" in p) checkBandArray(c, p.dne_db, [...at, "dne_db"], "dne_db");
+    if ("tl_db" in p) checkBandArray(c, p.tl_db, [...at, "tl_db"]);
+    if ("dne_db" in p) checkBandArray(c, p.dne_db, [...at, "dne_db"]);
   });
 }
 
@@ -68,21 +68,21 @@ function checkLinkBands(c: Checker, net: NetworkShape, i: number): void {
       checkPartitionParts(c, net, i);
       return;
     case "vent":
-      checkBandArray(c, link.attenuation_db, [...at, "attenuation_db"], "attenuation_db");
+      checkBandArray(c, link.attenuation_db, [...at, "attenuation_db"]);
       link.attenuation_parts?.forEach((p, k) =>
-        checkBandArray(c, p.attenuation_db, [...at, "attenuation_parts", k, "attenuation_db"], "attenuation_db"),
+        checkBandArray(c, p.attenuation_db, [...at, "attenuation_parts", k, "attenuation_db"]),
       );
       return;
     case "floor":
-      checkBandArray(c, link.tl_db, [...at, "tl_db"], "tl_db");
-      checkBandArray(c, link.impact?.ln_db, [...at, "impact", "ln_db"], "ln_db");
-      checkBandArray(c, link.impact?.delta_l_db, [...at, "impact", "delta_l_db"], "delta_l_db");
+      checkBandArray(c, link.tl_db, [...at, "tl_db"]);
+      checkBandArray(c, link.impact?.ln_db, [...at, "impact", "ln_db"]);
+      checkBandArray(c, link.impact?.delta_l_db, [...at, "impact", "delta_l_db"]);
       return;
     case "flanking":
-      checkBandArray(c, link.element_i.tl_db, [...at, "element_i", "tl_db"], "tl_db");
-      checkBandArray(c, link.element_j.tl_db, [...at, "element_j", "tl_db"], "tl_db");
-      checkBandArray(c, link.kij_db, [...at, "kij_db"], "kij_db");
-      checkBandArray(c, link.delta_r_db, [...at, "delta_r_db"], "delta_r_db");
+      checkBandArray(c, link.element_i.tl_db, [...at, "element_i", "tl_db"]);
+      checkBandArray(c, link.element_j.tl_db, [...at, "element_j", "tl_db"]);
+      checkBandArray(c, link.kij_db, [...at, "kij_db"]);
+      checkBandArray(c, link.delta_r_db, [...at, "delta_r_db"]);
       return;
   }
 }
@@ -112,7 +112,7 @@ function checkSources(c: Checker, net: NetworkShape): void {
       if (!spaceIds.has(s.space)) c.issue([...at, "space"], `source names unknown space "${s.space}"`);
       if (airborneSpaces.has(s.space)) c.issue([...at, "space"], `space "${s.space}" already has an airborne source`);
       airborneSpaces.add(s.space);
-      checkBandArray(c, s.levels_db, [...at, "levels_db"], "levels_db");
+      checkBandArray(c, s.levels_db, [...at, "levels_db"]);
       return;
     }
     const floor = floors.get(s.floor);
@@ -120,7 +120,7 @@ function checkSources(c: Checker, net: NetworkShape): void {
     else if (s.ln_db === undefined && floor.impact === undefined) {
       c.issue([...at, "ln_db"], `impact source on "${s.floor}" needs ln_db (the floor has no impact data)`);
     }
-    checkBandArray(c, s.ln_db, [...at, "ln_db"], "ln_db");
+    checkBandArray(c, s.ln_db, [...at, "ln_db"]);
   });
 }
 
