@@ -77,3 +77,22 @@ describe("emptyPlan", () => {
     expect(parsePlan(serializePlan(plan)).ok).toBe(true);
   });
 });
+
+import { elementsOfType } from "./elements.js";
+import { roomEdges } from "../geometry/walls.js";
+
+describe("derived lists and drafts", () => {
+  it("re-reads a plan that is changed in place (an immer draft is), and caches a frozen one", () => {
+    const plan = planWith([groundLevel, room]);
+    expect(elementsOfType(plan, "room")).toHaveLength(1);
+    plan.elements.B = { ...room, id: "B", outline: rect("B", 4, 0, 4, 5) };
+    expect(elementsOfType(plan, "room").map((r) => r.id)).toEqual(["A", "B"]);
+    const a = plan.elements.A!;
+    if (a.type !== "room") throw new Error("fixture");
+    const before = roomEdges(a)[0]!.lengthM;
+    a.outline[1] = { ...a.outline[1]!, x: 6 };
+    expect(roomEdges(a)[0]!.lengthM).not.toBe(before);
+    Object.freeze(plan.elements);
+    expect(elementsOfType(plan, "room")).toBe(elementsOfType(plan, "room"));
+  });
+});

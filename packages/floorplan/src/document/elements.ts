@@ -1,11 +1,12 @@
 import type { Element, ElementOf, ElementType, Plan } from "./schema.js";
 
-// Plans are treated as immutable values (the editor replaces them through immer), so the
-// per-type lists are cached against the elements record they were read from.
+// Per-type lists are cached only for frozen records (immer freezes every committed state): an
+// immer draft or a plain object may still change under the same identity.
 const byTypeCache = new WeakMap<object, Map<ElementType, Element[]>>();
 
 function byType(plan: Plan): Map<ElementType, Element[]> {
-  let map = byTypeCache.get(plan.elements);
+  const frozen = Object.isFrozen(plan.elements);
+  let map = frozen ? byTypeCache.get(plan.elements) : undefined;
   if (!map) {
     map = new Map();
     const ids = Object.keys(plan.elements).sort();
@@ -15,14 +16,19 @@ function byType(plan: Plan): Map<ElementType, Element[]> {
       list.push(el);
       map.set(el.type, list);
     }
-    byTypeCache.set(plan.elements, map);
+    if (frozen) byTypeCache.set(plan.elements, map);
   }
   return map;
 }
 
+const byId = (a: Element, b: Element) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
+
 /** The plan's elements of one type, sorted by id so every derived list is deterministic (no unit); do not mutate. */
 export function elementsOfType<T extends ElementType>(plan: Plan, type: T): readonly ElementOf<T>[] {
-  return (byType(plan).get(type) ?? []) as ElementOf<T>[];
+  if (Object.isFrozen(plan.elements)) return (byType(plan).get(type) ?? []) as ElementOf<T>[];
+  const out: Element[] = [];
+  for (const el of Object.values(plan.elements)) if (el.type === type) out.push(el);
+  return out.sort(byId) as ElementOf<T>[];
 }
 
 /** One element by id and expected type, or undefined (no unit). */

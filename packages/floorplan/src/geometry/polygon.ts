@@ -43,12 +43,13 @@ export interface Bounds {
 
 const boundsCache = new WeakMap<readonly Point[], Bounds>();
 
-/** Axis-aligned bounds of a point list, m (cached per outline array; treat outlines as immutable). */
+/** Axis-aligned bounds of a point list, m (cached for frozen outlines, as immer leaves them). */
 export function boundsM(points: readonly Point[]): Bounds {
-  const hit = boundsCache.get(points);
+  const frozen = Object.isFrozen(points);
+  const hit = frozen ? boundsCache.get(points) : undefined;
   if (hit) return hit;
   const b = computedBounds(points);
-  boundsCache.set(points, b);
+  if (frozen) boundsCache.set(points, b);
   return b;
 }
 

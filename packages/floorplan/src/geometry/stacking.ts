@@ -1,7 +1,7 @@
 import { elementsOfType, levelsByElevation } from "../document/elements.js";
 import type { Plan, Room, Void } from "../document/schema.js";
 import { polygonOverlapM2 } from "./overlap.js";
-import { boundsM, polygonAreaM2 } from "./polygon.js";
+import { boundsM, polygonAreaM2, type Bounds } from "./polygon.js";
 
 /** A room above another on the next level up, with the floor area they share, m². */
 export interface StackedPair {
@@ -14,8 +14,7 @@ export interface StackedPair {
 /** Minimum shared floor area for a floor link, m²; slivers from drawing slop are ignored. */
 export const MIN_OVERLAP_M2 = 0.05;
 
-function bboxOverlap(a: Room | Void, b: Room | Void): boolean {
-  const p = boundsM(a.outline), q = boundsM(b.outline);
+function bboxOverlap(p: Bounds, q: Bounds): boolean {
   return p.minX < q.maxX && q.minX < p.maxX && p.minY < q.maxY && q.minY < p.maxY;
 }
 
@@ -25,11 +24,14 @@ export function stackedRooms(plan: Plan): StackedPair[] {
   const rooms = elementsOfType(plan, "room");
   const out: StackedPair[] = [];
   for (let k = 0; k + 1 < levels.length; k++) {
-    const lower = rooms.filter((r) => r.levelId === levels[k]!.id);
+    // Bounds once per room, lower rooms sorted on x so each upper room scans only its stretch.
+    const lower = rooms.filter((r) => r.levelId === levels[k]!.id).map((r) => ({ r, b: boundsM(r.outline) })).sort((p, q) => p.b.minX - q.b.minX);
     const upper = rooms.filter((r) => r.levelId === levels[k + 1]!.id);
     for (const u of upper) {
-      for (const l of lower) {
-        if (!bboxOverlap(u, l)) continue;
+      const bu = boundsM(u.outline);
+      for (const { r: l, b: bl } of lower) {
+        if (bl.minX >= bu.maxX) break;
+        if (!bboxOverlap(bu, bl)) continue;
         const overlapM2 = polygonOverlapM2(u.outline, l.outline);
         if (overlapM2 >= MIN_OVERLAP_M2) out.push({ id: `${u.id}^${l.id}`, upperRoomId: u.id, lowerRoomId: l.id, overlapM2 });
       }
@@ -42,7 +44,7 @@ export function stackedRooms(plan: Plan): StackedPair[] {
 export function roomsCoveredByVoid(plan: Plan, v: Void): Array<{ roomId: string; overlapM2: number; fraction: number }> {
   const out: Array<{ roomId: string; overlapM2: number; fraction: number }> = [];
   for (const room of elementsOfType(plan, "room")) {
-    if (room.levelId !== v.levelId || !bboxOverlap(room, v)) continue;
+    if (room.levelId !== v.levelId || !bboxOverlap(boundsM(room.outline), boundsM(v.outline))) continue;
     const overlapM2 = polygonOverlapM2(room.outline, v.outline);
     if (overlapM2 < MIN_OVERLAP_M2) continue;
     const roomArea = polygonAreaM2(room.outline);
@@ -59,7 +61,7 @@ export function roomsAboveVoid(plan: Plan, v: Void): Array<{ roomId: string; ove
   if (k < 0 || !above || v.kind === "crawlspace") return [];
   const out: Array<{ roomId: string; overlapM2: number }> = [];
   for (const room of elementsOfType(plan, "room")) {
-    if (room.levelId !== above.id || !bboxOverlap(room, v)) continue;
+    if (room.levelId !== above.id || !bboxOverlap(boundsM(room.outline), boundsM(v.outline))) continue;
     const overlapM2 = polygonOverlapM2(room.outline, v.outline);
     if (overlapM2 >= MIN_OVERLAP_M2) out.push({ roomId: room.id, overlapM2 });
   }

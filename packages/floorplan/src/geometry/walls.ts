@@ -39,9 +39,10 @@ export interface WallPiece {
 
 const edgesCache = new WeakMap<Room, RoomEdge[]>();
 
-/** The edges of a room outline, skipping zero-length ones, m (cached per room object). */
+/** The edges of a room outline, skipping zero-length ones, m (cached for frozen rooms, as immer leaves them). */
 export function roomEdges(room: Room): RoomEdge[] {
-  const hit = edgesCache.get(room);
+  const frozen = Object.isFrozen(room) && Object.isFrozen(room.outline);
+  const hit = frozen ? edgesCache.get(room) : undefined;
   if (hit) return hit;
   const out: RoomEdge[] = [];
   const n = room.outline.length;
@@ -60,7 +61,7 @@ export function roomEdges(room: Room): RoomEdge[] {
       lengthM,
     });
   }
-  edgesCache.set(room, out);
+  if (frozen) edgesCache.set(room, out);
   return out;
 }
 

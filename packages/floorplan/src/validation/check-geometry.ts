@@ -57,18 +57,20 @@ export function geometryProblems(plan: Plan): Problem[] {
     }
     if (el.type === "room") clean.add(el.id);
   }
-  const rooms = elementsOfType(plan, "room").filter((r) => clean.has(r.id));
+  // Sort and sweep on x so only rooms whose bounds meet are compared.
+  const rooms = elementsOfType(plan, "room")
+    .filter((r) => clean.has(r.id))
+    .map((r) => ({ r, b: boundsM(r.outline) }))
+    .sort((p, q) => p.b.minX - q.b.minX);
   for (let i = 0; i < rooms.length; i++) {
-    const a = rooms[i]!;
-    const ba = boundsM(a.outline);
-    for (let j = i + 1; j < rooms.length; j++) {
-      const b = rooms[j]!;
-      if (a.levelId !== b.levelId) continue;
-      const bb = boundsM(b.outline);
-      if (ba.maxX <= bb.minX || bb.maxX <= ba.minX || ba.maxY <= bb.minY || bb.maxY <= ba.minY) continue;
+    const { r: a, b: ba } = rooms[i]!;
+    for (let j = i + 1; j < rooms.length && rooms[j]!.b.minX < ba.maxX; j++) {
+      const { r: b, b: bb } = rooms[j]!;
+      if (a.levelId !== b.levelId || ba.maxY <= bb.minY || bb.maxY <= ba.minY) continue;
       const overlap = polygonOverlapM2(a.outline, b.outline);
       if (overlap >= MIN_OVERLAP_M2) {
-        out.push(problem("rooms-overlap", a.id, `${called(a, "Room")} and ${called(b, "room")} overlap by ${formatArea(overlap, unit)} on the same level; a floor area can belong to one room only.`, `Move the shared wall so the two outlines meet along it instead of overlapping.`));
+        const [first, second] = a.id < b.id ? [a, b] : [b, a];
+        out.push(problem("rooms-overlap", first.id, `${called(first, "Room")} and ${called(second, "room")} overlap by ${formatArea(overlap, unit)} on the same level; a floor area can belong to one room only.`, `Move the shared wall so the two outlines meet along it instead of overlapping.`));
       }
     }
   }
