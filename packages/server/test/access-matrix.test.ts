@@ -42,6 +42,21 @@ const EXPECTED: Record<string, Access> = {
   "post /catalogue/constructions": ["owner", "surveyor"],
   "delete /catalogue/constructions/:constructionId": ["owner", "surveyor"],
   "get /audit": ["owner"],
+  "get /projects/:projectId/brief": "signed-in",
+  "put /projects/:projectId/brief": ["owner", "surveyor"],
+  "get /projects/:projectId/measurements": "signed-in",
+  "post /projects/:projectId/measurements": ["owner", "surveyor"],
+  "post /projects/:projectId/measurements/csv-preview": ["owner", "surveyor"],
+  "get /projects/:projectId/measurements/:measurementId": "signed-in",
+  "patch /projects/:projectId/measurements/:measurementId": ["owner", "surveyor"],
+  "delete /projects/:projectId/measurements/:measurementId": ["owner", "surveyor"],
+  "get /projects/:projectId/measurements/:measurementId/csv": "signed-in",
+  "get /projects/:projectId/measurements/:measurementId/audio": "signed-in",
+  "post /projects/:projectId/recordings": ["owner", "surveyor"],
+  "get /projects/:projectId/photos": "signed-in",
+  "post /projects/:projectId/photos": ["owner", "surveyor"],
+  "get /projects/:projectId/photos/:photoId/image": "signed-in",
+  "delete /projects/:projectId/photos/:photoId": ["owner", "surveyor"],
 };
 
 const allowed = (access: Access, role: Role) => access === "public" || access === "signed-in" || access.includes(role);

@@ -42,6 +42,21 @@ describe("bad input", () => {
     ["add construction", "post", () => "/api/v1/catalogue/constructions", { id: "ok-id", name: "Fine name", category: "wall", thicknessMm: 100, surfaceDensityKgM2: 20 }, ["sourceNote", "csv"]],
     ["remove construction", "delete", () => "/api/v1/catalogue/constructions/BAD_ID", undefined, ["constructionId"]],
     ["audit", "get", () => "/api/v1/audit?limit=0", undefined, ["limit"]],
+    ["get brief", "get", () => "/api/v1/projects/nope/brief", undefined, ["projectId"]],
+    ["save brief", "put", (id) => `/api/v1/projects/${id}/brief`, { baseVersion: -1, brief: { noises: [{ kind: "loud" }], target: { kind: "nc", nc: 5 } } }, ["baseVersion", "brief.noises.0.kind", "brief.noises.0.direction", "brief.target.nc"]],
+    ["list measurements", "get", () => "/api/v1/projects/nope/measurements", undefined, ["projectId"]],
+    ["add measurement", "post", (id) => `/api/v1/projects/${id}/measurements`, { label: "", kind: "loud", takenAt: "yesterday", leqDb: [1, 2] }, ["label", "kind", "takenAt", "leqDb"]],
+    ["preview spectrum file", "post", (id) => `/api/v1/projects/${id}/measurements/csv-preview`, { text: "" }, ["text"]],
+    ["get measurement", "get", (id) => `/api/v1/projects/${id}/measurements/nope`, undefined, ["measurementId"]],
+    ["edit measurement", "patch", (id) => `/api/v1/projects/${id}/measurements/00000000-0000-4000-8000-000000000000`, { calibrationDb: "x", kind: "loud" }, ["calibrationDb", "kind"]],
+    ["delete measurement", "delete", (id) => `/api/v1/projects/${id}/measurements/nope`, undefined, ["measurementId"]],
+    ["export measurement", "get", (id) => `/api/v1/projects/${id}/measurements/nope/csv`, undefined, ["measurementId"]],
+    ["play back", "get", (id) => `/api/v1/projects/${id}/measurements/00000000-0000-4000-8000-000000000000/audio?startS=-1&durationS=0`, undefined, ["startS", "durationS"]],
+    ["upload recording", "post", (id) => `/api/v1/projects/${id}/recordings`, { label: "x" }, ["file"]],
+    ["list photos", "get", () => "/api/v1/projects/nope/photos", undefined, ["projectId"]],
+    ["upload photo", "post", (id) => `/api/v1/projects/${id}/photos`, {}, ["file"]],
+    ["photo image", "get", (id) => `/api/v1/projects/${id}/photos/00000000-0000-4000-8000-000000000000/image?size=huge`, undefined, ["size"]],
+    ["delete photo", "delete", (id) => `/api/v1/projects/${id}/photos/nope`, undefined, ["photoId"]],
   ];
 
   it.each(cases)("%s answers 400 with the field paths", async (_name, method, path, body, paths) => {

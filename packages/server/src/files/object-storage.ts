@@ -19,6 +19,10 @@ export function createObjectStorage(config: AppConfig["s3"]): ObjectStorage {
   const client = new S3Client({
     region: config.region,
     forcePathStyle: config.forcePathStyle,
+    // Streamed bodies otherwise go out as aws-chunked with trailing checksums, which S3-compatible
+    // stores (the local fake among them) may keep verbatim; integrity is our own sha256.
+    requestChecksumCalculation: "WHEN_REQUIRED",
+    responseChecksumValidation: "WHEN_REQUIRED",
     ...(config.endpoint ? { endpoint: config.endpoint } : {}),
     ...(config.accessKeyId && config.secretAccessKey ? { credentials: { accessKeyId: config.accessKeyId, secretAccessKey: config.secretAccessKey } } : {}),
   });
