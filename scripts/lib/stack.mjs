@@ -57,13 +57,15 @@ export function migrate(root, databaseUrl) {
   run("node", ["packages/server/dist/scripts/migrate.js"], { cwd: root, env: { ...process.env, DATABASE_URL: databaseUrl } });
 }
 
-/** Starts the local fakes (mail now) and waits until they answer. */
-export async function startFakes(root, { smtpPort, mailApiPort }) {
+/** Starts the local fakes (mail, object storage) and waits until they answer. */
+export async function startFakes(root, { smtpPort, mailApiPort, s3Port, s3Dir }) {
+  if (s3Dir) mkdirSync(s3Dir, { recursive: true });
   const child = startService("fakes", "node", ["packages/fakes/dist/main.js"], {
     cwd: root,
-    env: { ...process.env, HUSHMARK_SMTP_PORT: String(smtpPort), HUSHMARK_MAIL_API_PORT: String(mailApiPort) },
+    env: { ...process.env, HUSHMARK_SMTP_PORT: String(smtpPort), HUSHMARK_MAIL_API_PORT: String(mailApiPort), HUSHMARK_S3_PORT: String(s3Port), ...(s3Dir ? { HUSHMARK_S3_DIR: s3Dir } : {}) },
   });
   await waitForHttp(`http://127.0.0.1:${mailApiPort}/health`, 15_000, child);
+  await waitForHttp(`http://127.0.0.1:${s3Port}/`, 15_000, child);
   return child;
 }
 

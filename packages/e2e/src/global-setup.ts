@@ -20,7 +20,7 @@ export default async function setup(project: TestProject) {
   await client.connect();
   await client.query("DROP SCHEMA IF EXISTS public CASCADE; CREATE SCHEMA public;");
   await client.end();
-  const [port, smtpPort, mailApiPort] = [await freePort(), await freePort(), await freePort()];
+  const [port, smtpPort, mailApiPort, s3Port] = [await freePort(), await freePort(), await freePort(), await freePort()];
   const env = {
     ...process.env,
     NODE_ENV: "development" as const,
@@ -30,12 +30,15 @@ export default async function setup(project: TestProject) {
     HUSHMARK_SMTP_PORT: String(smtpPort),
     HUSHMARK_MAIL_API_PORT: String(mailApiPort),
     HUSHMARK_MAIL_API_URL: `http://127.0.0.1:${mailApiPort}`,
+    HUSHMARK_S3_PORT: String(s3Port),
+    HUSHMARK_S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
     HUSHMARK_LOG_LEVEL: "warn",
   };
   await runNode(["packages/server/dist/scripts/migrate.js"], env);
   await runNode(["packages/server/dist/scripts/seed.js"], env);
   const fakes = startNode(["packages/fakes/dist/main.js"], env);
   await waitFor(`http://127.0.0.1:${mailApiPort}/health`, 15_000, fakes.child, fakes.output);
+  await waitFor(`http://127.0.0.1:${s3Port}/`, 15_000, fakes.child, fakes.output);
   const server = startNode(["packages/server/dist/index.js"], env);
   await waitFor(`http://127.0.0.1:${port}/api/v1/health`, 30_000, server.child, server.output);
   project.provide("baseUrl", `http://127.0.0.1:${port}`);
