@@ -40,8 +40,14 @@ export function buildFlankingLinks(ctx: BuildContext, pruneDb = FLANKING_PRUNE_D
   const links: LinkInput[] = [];
   const traces: LinkTrace[] = [];
   const junctions = wallJunctions(ctx.pieces, ctx.plan.defaults.wallToleranceM);
-  const at = new Map<string, Junction>();
-  for (const j of junctions) for (const arm of j.arms) at.set(`${arm.pieceId}@${arm.end}`, j);
+  const at = new Map<string, { start?: Junction; end?: Junction }>();
+  for (const j of junctions) {
+    for (const arm of j.arms) {
+      const ends = at.get(arm.pieceId) ?? {};
+      ends[arm.end] = j;
+      at.set(arm.pieceId, ends);
+    }
+  }
   const pieceById = new Map(ctx.pieces.map((p) => [p.id, p]));
   const hasRoom = (p: WallPiece, roomId: string) => p.sides.some((s) => s.roomId === roomId);
 
@@ -55,7 +61,7 @@ export function buildFlankingLinks(ctx: BuildContext, pruneDb = FLANKING_PRUNE_D
     const directTauS = sep.construction.tlDb.map((tl) => separatingM2 * 10 ** (-tl / 10));
     const keep = (link: LinkInput) => !Number.isFinite(pruneDb) || !weakerInEveryBand(link, directTauS, pruneDb);
     for (const end of ["start", "end"] as const) {
-      const j = at.get(`${s.id}@${end}`);
+      const j = at.get(s.id)?.[end];
       if (!j) continue;
       const kind = distinctDirections(j) >= 4 ? "cross" : "t";
       for (const armI of j.arms) {

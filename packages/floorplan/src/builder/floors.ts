@@ -44,15 +44,16 @@ export function buildFloorLinks(ctx: BuildContext): { links: LinkInput[]; traces
   const links: LinkInput[] = [];
   const traces: LinkTrace[] = [];
   const viaVoid = new Set<string>();
+  const rooms = [...ctx.rooms.values()];
   for (const v of elementsOfType(ctx.plan, "void")) {
-    for (const { roomId, overlapM2, fraction } of roomsCoveredByVoid(ctx.plan, v)) {
+    for (const { roomId, overlapM2, fraction } of roomsCoveredByVoid(ctx.plan, v, rooms)) {
       const room = ctx.rooms.get(roomId)!;
       const r = ceilingLink(ctx, v, room, overlapM2);
       links.push(r.link);
       traces.push(r.trace);
       if (v.kind !== "crawlspace" && fraction >= VOID_COVER_FRACTION) viaVoid.add(roomId);
     }
-    for (const { roomId, overlapM2 } of roomsAboveVoid(ctx.plan, v)) {
+    for (const { roomId, overlapM2 } of roomsAboveVoid(ctx.plan, v, rooms, ctx.levels)) {
       const upper = ctx.rooms.get(roomId)!;
       const r = floorLink(ctx, upper, v.id, overlapM2, `${upper.id}^${v.id}`, polygonCentroid(upper.outline), upper.levelId);
       links.push(r.link);

@@ -8,6 +8,25 @@ export type OpeningPlacement =
   | { ok: true; hostId: string; fromM: number; toM: number; start: Point; end: Point }
   | { ok: false; reason: "no-wall" | "outside-wall" | "wider-than-wall"; hostLengthM?: number };
 
+// Piece lists are built once per derivation and never changed, so an index per list is safe.
+const byEdgeCache = new WeakMap<readonly WallPiece[], Map<string, WallPiece[]>>();
+
+function piecesOnEdge(pieces: readonly WallPiece[], ref: string): readonly WallPiece[] {
+  let index = byEdgeCache.get(pieces);
+  if (!index) {
+    index = new Map();
+    for (const p of pieces) {
+      for (const s of p.sides) {
+        const list = index.get(s.edgeRef) ?? [];
+        list.push(p);
+        index.set(s.edgeRef, list);
+      }
+    }
+    byEdgeCache.set(pieces, index);
+  }
+  return index.get(ref) ?? [];
+}
+
 /** Places an opening on its host edge or free wall and finds the wall piece holding it (m, within `toleranceM`). */
 export function openingPlacement(
   plan: Plan,
@@ -27,7 +46,7 @@ export function openingPlacement(
   if (opening.widthM > edge.lengthM + toleranceM) return { ok: false, reason: "wider-than-wall", hostLengthM: edge.lengthM };
   if (from < -toleranceM || to > edge.lengthM + toleranceM) return { ok: false, reason: "outside-wall", hostLengthM: edge.lengthM };
   const centre = (from + to) / 2;
-  const piece = pieces.find((p) => p.sides.some((s) => s.edgeRef === edge.ref && s.fromM - 1e-9 <= centre && centre <= s.toM + 1e-9));
+  const piece = piecesOnEdge(pieces, edge.ref).find((p) => p.sides.some((s) => s.edgeRef === edge.ref && s.fromM - 1e-9 <= centre && centre <= s.toM + 1e-9));
   if (!piece) return { ok: false, reason: "no-wall" };
   const side = piece.sides.find((s) => s.edgeRef === edge.ref)!;
   if (opening.widthM > side.toM - side.fromM + toleranceM) return { ok: false, reason: "wider-than-wall", hostLengthM: side.toM - side.fromM };

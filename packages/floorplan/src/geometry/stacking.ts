@@ -1,5 +1,5 @@
 import { elementsOfType, levelsByElevation } from "../document/elements.js";
-import type { Plan, Room, Void } from "../document/schema.js";
+import type { Level, Plan, Room, Void } from "../document/schema.js";
 import { polygonOverlapM2 } from "./overlap.js";
 import { boundsM, polygonAreaM2, type Bounds } from "./polygon.js";
 
@@ -40,10 +40,10 @@ export function stackedRooms(plan: Plan): StackedPair[] {
   return out;
 }
 
-/** Rooms of the void's level that the void spans, with their overlap and covered fraction, m². */
-export function roomsCoveredByVoid(plan: Plan, v: Void): Array<{ roomId: string; overlapM2: number; fraction: number }> {
+/** Rooms of the void's level that the void spans, with their overlap and covered fraction, m² (`rooms` saves re-reading the plan in loops). */
+export function roomsCoveredByVoid(plan: Plan, v: Void, rooms: readonly Room[] = elementsOfType(plan, "room")): Array<{ roomId: string; overlapM2: number; fraction: number }> {
   const out: Array<{ roomId: string; overlapM2: number; fraction: number }> = [];
-  for (const room of elementsOfType(plan, "room")) {
+  for (const room of rooms) {
     if (room.levelId !== v.levelId || !bboxOverlap(boundsM(room.outline), boundsM(v.outline))) continue;
     const overlapM2 = polygonOverlapM2(room.outline, v.outline);
     if (overlapM2 < MIN_OVERLAP_M2) continue;
@@ -53,14 +53,18 @@ export function roomsCoveredByVoid(plan: Plan, v: Void): Array<{ roomId: string;
   return out;
 }
 
-/** Rooms on the level above a ceiling void or attic that overlap it, m². */
-export function roomsAboveVoid(plan: Plan, v: Void): Array<{ roomId: string; overlapM2: number }> {
-  const levels = levelsByElevation(plan);
+/** Rooms on the level above a ceiling void or attic that overlap it, m² (`rooms` and `levels` save re-reading the plan in loops). */
+export function roomsAboveVoid(
+  plan: Plan,
+  v: Void,
+  rooms: readonly Room[] = elementsOfType(plan, "room"),
+  levels: readonly Level[] = levelsByElevation(plan),
+): Array<{ roomId: string; overlapM2: number }> {
   const k = levels.findIndex((l) => l.id === v.levelId);
   const above = levels[k + 1];
   if (k < 0 || !above || v.kind === "crawlspace") return [];
   const out: Array<{ roomId: string; overlapM2: number }> = [];
-  for (const room of elementsOfType(plan, "room")) {
+  for (const room of rooms) {
     if (room.levelId !== above.id || !bboxOverlap(boundsM(room.outline), boundsM(v.outline))) continue;
     const overlapM2 = polygonOverlapM2(room.outline, v.outline);
     if (overlapM2 >= MIN_OVERLAP_M2) out.push({ roomId: room.id, overlapM2 });

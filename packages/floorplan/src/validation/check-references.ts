@@ -91,8 +91,9 @@ export function connectionProblems(plan: Plan, pieces: readonly WallPiece[]): Pr
   for (const r of elementsOfType(plan, "room")) {
     if (!r.finish) out.push(problem("finish-assumed", r.id, `${called(r, "Room")} has no finish recorded; a furnished room (reverberation time about 0.5 s) is assumed.`, "Choose the finish that matches the room, or enter a measured reverberation time."));
   }
+  const rooms = elementsOfType(plan, "room");
   for (const v of elementsOfType(plan, "void")) {
-    if (v.outline.length >= 3 && roomsCoveredByVoid(plan, v).length === 0) {
+    if (v.outline.length >= 3 && roomsCoveredByVoid(plan, v, rooms).length === 0) {
       out.push(problem("void-covers-nothing", v.id, `${called(v, "Void")} does not lie over or under any room of its level, so it links nothing.`, "Check its outline and level."));
     }
   }
