@@ -127,7 +127,8 @@ function gainsFor(s: SolvedNetwork, links: readonly number[]): Map<number, { a: 
   const er = base.e.subarray(base.receiver * c.B, base.receiver * c.B + c.B);
   const out = new Map<number, { a: number; byBand: number[] }>();
   for (const l of links) {
-    const after = receiverEnergyIfPerfect(evaluator, l);
+    // Below 10⁻¹² of the base (120 dB) the remainder is rounding: nothing else reaches the receiver.
+    const after = receiverEnergyIfPerfect(evaluator, l).map((v, b) => (v <= er[b]! * 1e-12 ? 0 : v));
     out.set(l, {
       a: 10 * Math.log10(aSum(er, s.aWeights) / aSum(after, s.aWeights)),
       byBand: Array.from(after, (v, b) => 10 * Math.log10(er[b]! / v)),
