@@ -148,3 +148,20 @@ describe("free-standing walls", () => {
     expect(r.links[link.id]!.points!["D2"]).toEqual({ x: 4, y: 3.4 });
   });
 });
+
+describe("flanking pruning", () => {
+  it("drops paths far weaker than the wall they flank, keeps them all on request", () => {
+    // A light stud party wall between rooms whose façade is 200 mm block: the façade path is
+    // much weaker than the wall itself in every band.
+    const els = [groundLevel, room("A", 0, 0, 4, 5), room("B", 4, 0, 4, 5)];
+    const extra = { defaults: { interiorWallConstructionId: "stud-wood-1x1-gypsum", exteriorWallConstructionId: "masonry-block-200", floorConstructionId: "floor-concrete-200", ceilingConstructionId: "ceiling-gypsum-12-5" } };
+    const all = built(els, extra, { flankingPruneDb: Infinity }).network.links!.filter((l) => l.type === "flanking");
+    const pruned = built(els, extra, { flankingPruneDb: 10 }).network.links!.filter((l) => l.type === "flanking");
+    expect(all).toHaveLength(3);
+    expect(pruned.length).toBeLessThan(all.length);
+    for (const l of all.filter((x) => !pruned.some((p) => p.id === x.id))) {
+      const wall = constructionCatalogue.constructions["stud-wood-1x1-gypsum"]!.tlDb.map((tl) => 12.5 * 10 ** (-tl / 10));
+      linkTauSM2(l).forEach((t, b) => expect(t).toBeLessThan(wall[b]! * 0.1));
+    }
+  });
+});
