@@ -62,6 +62,11 @@ export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function
       className="relative h-full w-full touch-none select-none overflow-hidden bg-paper outline-none focus-visible:ring-2 focus-visible:ring-focus"
       style={{ cursor: cursor ?? "default" }}
       data-testid="plan-canvas"
+      // The view transform, for browser tests and tools that need to aim at plan coordinates.
+      data-scale={v.scale}
+      data-ox={v.ox}
+      data-oy={v.oy}
+      data-level={levelId}
       onPointerDown={gestures.onPointerDown}
       onPointerMove={gestures.onPointerMove}
       onPointerUp={gestures.onPointerUp}

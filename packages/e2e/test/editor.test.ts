@@ -1,0 +1,283 @@
+import { readFile } from "node:fs/promises";
+import type { Browser, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import { launchBrowser, newPage } from "../src/browser.js";
+import { clickPlan, createProject, drawTwoRooms, getPlan, pickConstruction, setField, signIn, waitSaved } from "../src/editor-page.js";
+
+const SURVEYOR = "surveyor@larkspur.example";
+
+type Doc = { elements: Record<string, { type: string; name?: string; widthM?: number; leaks?: { undercutMm: number }; constructionId?: string; outline?: Array<{ x: number; y: number }> }> };
+const ofType = (doc: Doc, type: string) => Object.values(doc.elements).filter((e) => e.type === type);
+
+async function openSketch(page: Page, baseUrl: string, projectId: string): Promise<void> {
+  await page.goto(`${baseUrl}/projects/${projectId}/sketch`);
+  await page.getByTestId("plan-canvas").waitFor();
+}
+
+/** Selects an element through the accessible element list, the keyboard route to everything on the canvas. */
+async function selectInList(page: Page, name: RegExp): Promise<void> {
+  await page.getByRole("tab", { name: "Elements" }).click();
+  await page.getByRole("button", { name }).first().click();
+  await page.getByRole("tab", { name: "Details" }).click();
+}
+
+async function problemCount(page: Page): Promise<number> {
+  const text = (await page.getByRole("button", { name: /problem|No problems/ }).first().textContent()) ?? "";
+  const m = /^(\d+) problem/.exec(text);
+  return m ? Number(m[1]) : 0;
+}
+
+describe("the plan editor and the sound-path view", () => {
+  let browser: Browser;
+  const baseUrl = inject("baseUrl");
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => browser?.close());
+
+  it("draws two rooms by mouse with a door and a window, picks constructions, saves, and reloads unchanged", async () => {
+    const { context, page, errors } = await newPage(browser);
+    await signIn(page, baseUrl, SURVEYOR);
+    const projectId = await createProject(page, baseUrl, "Editor test — two rooms");
+    await openSketch(page, baseUrl, projectId);
+
+    await drawTwoRooms(page);
+    await page.getByRole("button", { name: "Door", exact: true }).click();
+    await clickPlan(page, 4, 1.5);
+    await setField(page, "Name", "Connecting door");
+    await setField(page, "Undercut", "20");
+    await pickConstruction(page, "solid core");
+    await page.getByRole("button", { name: "Window", exact: true }).click();
+    await clickPlan(page, 2, 0);
+    await setField(page, "Name", "Street window");
+    await pickConstruction(page, "laminated");
+    await waitSaved(page);
+
+    const saved = (await getPlan(page, baseUrl, projectId)).document as Doc;
+    const rooms = ofType(saved, "room");
+    expect(rooms).toHaveLength(2);
+    expect(rooms.map((r) => r.outline?.map((p) => [p.x, p.y])).sort()).toEqual([
+      [[0, 0], [4, 0], [4, 3], [0, 3]],
+      [[4, 0], [8, 0], [8, 3], [4, 3]],
+    ]);
+    const door = ofType(saved, "door")[0]!;
+    expect(door).toMatchObject({ name: "Connecting door", constructionId: "door-solid-core", leaks: { undercutMm: 20 } });
+    expect(ofType(saved, "window")[0]).toMatchObject({ name: "Street window", constructionId: "glazing-laminated-12-7" });
+
+    await page.reload();
+    await page.getByTestId("plan-canvas").waitFor();
+    await selectInList(page, /Select Connecting door/);
+    await expect(page.getByLabel("Undercut").inputValue()).resolves.toBe("20");
+    const again = (await getPlan(page, baseUrl, projectId)).document;
+    expect(again).toEqual(saved);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it("undoes and redoes by keyboard, and takes typed exact lengths while drawing", async () => {
+    const { context, page, errors } = await newPage(browser);
+    await signIn(page, baseUrl, SURVEYOR);
+    const projectId = await createProject(page, baseUrl, "Editor test — typing");
+    await openSketch(page, baseUrl, projectId);
+
+    await page.getByRole("button", { name: "Room", exact: true }).click();
+    const canvas = page.getByTestId("plan-canvas");
+    const a = await (await import("../src/editor-page.js")).planToPage(page, 1, 1);
+    await page.mouse.move(a.x, a.y);
+    await page.mouse.down();
+    await page.mouse.move(a.x + 60, a.y - 40, { steps: 5 });
+    await page.keyboard.type("3.65 x 2.4");
+    await page.keyboard.press("Enter");
+    await page.mouse.up();
+    await waitSaved(page);
+    let doc = (await getPlan(page, baseUrl, projectId)).document as Doc;
+    expect(ofType(doc, "room")[0]!.outline!.map((p) => [p.x, p.y])).toEqual([[1, 1], [4.65, 1], [4.65, 3.4], [1, 3.4]]);
+
+    await page.getByRole("button", { name: "Wall", exact: true }).click();
+    await clickPlan(page, 1, 5);
+    const towards = await (await import("../src/editor-page.js")).planToPage(page, 3, 5);
+    await page.mouse.move(towards.x, towards.y);
+    await page.keyboard.type("10'6\"");
+    await page.keyboard.press("Enter");
+    await page.keyboard.press("Escape");
+    await waitSaved(page);
+    doc = (await getPlan(page, baseUrl, projectId)).document as Doc;
+    const wall = ofType(doc, "wall")[0] as unknown as { start: { x: number }; end: { x: number; y: number } };
+    expect(wall.end.x - wall.start.x).toBeCloseTo(3.2, 2);
+
+    await canvas.focus();
+    await page.keyboard.press("Control+z");
+    await waitSaved(page);
+    doc = (await getPlan(page, baseUrl, projectId)).document as Doc;
+    expect(ofType(doc, "wall")).toHaveLength(0);
+    await page.keyboard.press("Control+Shift+z");
+    await waitSaved(page);
+    doc = (await getPlan(page, baseUrl, projectId)).document as Doc;
+    expect(ofType(doc, "wall")).toHaveLength(1);
+    await page.getByRole("button", { name: "Undo" }).click();
+    await page.getByRole("button", { name: "Undo" }).click();
+    await waitSaved(page);
+    doc = (await getPlan(page, baseUrl, projectId)).document as Doc;
+    expect(ofType(doc, "room")).toHaveLength(0);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it("shows a validation problem on the plan and in the list, and clears it when fixed", async () => {
+    const { context, page, errors } = await newPage(browser);
+    await signIn(page, baseUrl, SURVEYOR);
+    const projectId = await createProject(page, baseUrl, "Editor test — problems");
+    await openSketch(page, baseUrl, projectId);
+    await drawTwoRooms(page);
+    await page.getByRole("button", { name: "Door", exact: true }).click();
+    await clickPlan(page, 4, 1.5);
+    const before = await problemCount(page);
+    await setField(page, "Width", "5");
+    await expect.poll(() => problemCount(page)).toBe(before + 1);
+    await page.getByRole("button", { name: /problem/ }).first().click();
+    const item = page.getByRole("list", { name: "Plan problems" }).getByRole("button").first();
+    await expect(item.textContent()).resolves.toMatch(/wider|wall/i);
+    await item.click();
+    await setField(page, "Width", "0.9");
+    await expect.poll(() => problemCount(page)).toBe(before);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it("marks the leaky door as the weakest link, and sealing its undercut lowers the level received", async () => {
+    const { context, page, errors } = await newPage(browser);
+    await signIn(page, baseUrl, SURVEYOR);
+    const projectId = await createProject(page, baseUrl, "Editor test — paths");
+    await openSketch(page, baseUrl, projectId);
+    await drawTwoRooms(page);
+    await page.getByRole("button", { name: "Door", exact: true }).click();
+    await clickPlan(page, 4, 1.5);
+    await setField(page, "Name", "Connecting door");
+    await setField(page, "Undercut", "25");
+    await waitSaved(page);
+
+    await page.getByRole("link", { name: "Paths" }).click();
+    const level = page.getByTestId("received-dba");
+    await level.waitFor({ timeout: 20_000 });
+    const first = page.getByRole("region", { name: "Where the sound gets through" }).getByRole("button").first();
+    await expect(first.textContent()).resolves.toContain("Connecting door");
+    const leaky = Number.parseFloat((await level.textContent()) ?? "");
+
+    await first.click();
+    const undercut = page.getByLabel("Undercut");
+    await undercut.fill("0");
+    await undercut.press("Enter");
+    await expect.poll(async () => Number.parseFloat((await level.textContent()) ?? ""), { timeout: 20_000 }).toBeLessThan(leaky - 1);
+    await page.getByTestId("recomputing").waitFor({ state: "detached" });
+    const doc = (await getPlan(page, baseUrl, projectId)).document as Doc;
+    expect(ofType(doc, "door")[0]!.leaks?.undercutMm).toBe(0);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it("the same plan edited in two browsers prompts, and keeping mine loses neither version", async () => {
+    const a = await newPage(browser);
+    const b = await newPage(browser);
+    await signIn(a.page, baseUrl, SURVEYOR);
+    await signIn(b.page, baseUrl, "owner@larkspur.example");
+    const projectId = await createProject(a.page, baseUrl, "Editor test — conflict");
+    await openSketch(a.page, baseUrl, projectId);
+    await drawTwoRooms(a.page);
+    await waitSaved(a.page);
+
+    await openSketch(b.page, baseUrl, projectId);
+    await selectInList(a.page, /Select Room 1/);
+    await setField(a.page, "Name", "Waiting room");
+    await waitSaved(a.page);
+
+    await selectInList(b.page, /Select Room 2/);
+    await setField(b.page, "Name", "Consulting room");
+    const dialog = b.page.getByRole("dialog", { name: "The plan was changed somewhere else" });
+    await dialog.waitFor({ timeout: 15_000 });
+    await dialog.getByRole("button", { name: "Keep mine as a new version" }).click();
+    await waitSaved(b.page);
+
+    const current = (await getPlan(b.page, baseUrl, projectId)).document as Doc;
+    const names = ofType(current, "room").map((r) => r.name).sort();
+    expect(names).toContain("Consulting room");
+    // Theirs stays in the history: some saved revision has the waiting room.
+    const revisions = (await (await b.page.request.get(`${baseUrl}/api/v1/projects/${projectId}/plan/revisions`)).json()) as { revisions: Array<{ version: number }> };
+    let found = false;
+    for (const r of revisions.revisions) {
+      const rev = (await (await b.page.request.get(`${baseUrl}/api/v1/projects/${projectId}/plan/revisions/${r.version}`)).json()) as { document: Doc };
+      if (ofType(rev.document, "room").some((room) => room.name === "Waiting room")) found = true;
+    }
+    expect(found).toBe(true);
+    expect([...a.errors, ...b.errors].filter((e) => !/409/.test(e))).toEqual([]);
+    await a.context.close();
+    await b.context.close();
+  });
+
+  it("keeps an edit made offline on the device and saves it when the connection is back", async () => {
+    const { context, page, errors } = await newPage(browser);
+    await signIn(page, baseUrl, SURVEYOR);
+    const projectId = await createProject(page, baseUrl, "Editor test — offline");
+    await openSketch(page, baseUrl, projectId);
+    await drawTwoRooms(page);
+    await waitSaved(page);
+    const version = (await getPlan(page, baseUrl, projectId)).version;
+
+    await context.setOffline(true);
+    await selectInList(page, /Select Room 1/);
+    await setField(page, "Name", "Offline room");
+    await page.locator("[data-testid=save-state][data-state=offline]").waitFor({ timeout: 15_000 });
+    const kept = await page.evaluate((id) => localStorage.getItem(`hushmark.pending-plan.${id}`), projectId);
+    expect(kept).toContain("Offline room");
+
+    await context.setOffline(false);
+    await waitSaved(page);
+    const after = await getPlan(page, baseUrl, projectId);
+    expect(after.version).toBeGreaterThan(version);
+    expect(ofType(after.document as Doc, "room").map((r) => r.name)).toContain("Offline room");
+    expect(await page.evaluate((id) => localStorage.getItem(`hushmark.pending-plan.${id}`), projectId)).toBeNull();
+    expect(errors.filter((e) => !/ERR_INTERNET_DISCONNECTED|Failed to fetch/.test(e))).toEqual([]);
+    await context.close();
+  });
+
+  it("the client sees the marked-up plan with no editing tools", async () => {
+    const { context, page, errors } = await newPage(browser);
+    await signIn(page, baseUrl, "client@fernhollow.example");
+    await page.locator("a[href*='/projects/']").first().click();
+    await page.getByRole("link", { name: "Paths" }).click();
+    await page.getByTestId("received-dba").waitFor({ timeout: 20_000 });
+    await expect(page.getByLabel("Colour legend").isVisible()).resolves.toBe(true);
+    await expect(page.getByText("Heard in the room:").isVisible()).resolves.toBe(true);
+    await expect(page.getByLabel("Where the noise is").isVisible()).resolves.toBe(true);
+    expect(await page.getByRole("region", { name: "Where the sound gets through" }).getByRole("button").count()).toBeGreaterThan(0);
+    expect(await page.getByLabel("Undercut").count()).toBe(0);
+    await page.getByRole("link", { name: "Sketch" }).click();
+    await page.getByTestId("plan-canvas").waitFor();
+    expect(await page.getByRole("toolbar", { name: "Sketch tools" }).count()).toBe(0);
+    expect(await page.getByRole("button", { name: "Undo" }).count()).toBe(0);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it("exports the marked-up plan as a PNG image", async () => {
+    const { context, page, errors } = await newPage(browser);
+    await signIn(page, baseUrl, SURVEYOR);
+    await page.locator("a[href*='/projects/']").first().click();
+    await page.getByRole("link", { name: "Paths" }).click();
+    await page.getByTestId("received-dba").waitFor({ timeout: 20_000 });
+    await page.getByRole("button", { name: "Export" }).click();
+    const download = page.waitForEvent("download");
+    await page.getByRole("button", { name: /Image \(PNG/ }).click();
+    const file = await download;
+    expect(file.suggestedFilename()).toMatch(/sound-paths\.png$/);
+    const bytes = await readFile((await file.path())!);
+    expect([...bytes.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+    const width = bytes.readUInt32BE(16), height = bytes.readUInt32BE(20);
+    // Print resolution: three device pixels per drawing pixel.
+    expect(width).toBeGreaterThanOrEqual(1900);
+    expect(height).toBeGreaterThan(900);
+    expect(bytes.length).toBeGreaterThan(20_000);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+});
