@@ -22,6 +22,7 @@ export interface CurveRating {
   readonly notes: readonly string[];
 }
 
+/** Assemble a CurveRating (values in dB) from a rating's head and its contour fit. */
 export function curveRating(
   head: { name: string; value: number; standard: string; notes?: string[] },
   frequenciesHz: readonly number[],

@@ -14,6 +14,7 @@ export interface Candidate {
   readonly meets: boolean;
 }
 
+/** A combination with its receiver energies, A-weighted energy, cost (currency units) and target status. */
 export function candidate(planner: UpgradePlanner, chosen: readonly number[], energy: Float64Array): Candidate {
   return { chosen: [...chosen], energy, aEnergy: planner.aEnergy(energy), cost: planner.totals(chosen).cost, meets: planner.meetsTarget(energy) };
 }
