@@ -52,6 +52,15 @@ describe("demo plans: weakest links", () => {
     expect(path.polyline.at(-1)).toMatchObject({ x: 3, y: 2, levelId: "ground" });
   });
 
+  it("Fernhollow: footfall upstairs comes down through the slab into the void and the recording room's tiles", () => {
+    const r = analysePlan(fernhollowDemo!.plan, constructionCatalogue, { source: { impactOnRoomId: "dance" }, receiver: "record" });
+    if (!r.ok) throw new Error(r.problems[0]!.message);
+    const path = r.onPlan.paths[0]!;
+    expect(path.kind).toBe("impact");
+    expect(path.steps.filter((s) => s.kind === "element").map((s) => (s.kind === "element" ? s.elementId : ""))).toEqual(["dance^plenum", "plenum^record"]);
+    expect(path.steps.at(-1)).toEqual({ kind: "space", spaceId: "record" });
+  });
+
   it("Cinema: the bass goes up through the joist floor with its ceiling fixed straight to the joists", () => {
     const r = analysePlan(cinemaDemo!.plan, constructionCatalogue, { source: { spaceId: "cinema", spectrumId: "cinema-bass" }, receiver: "nursery" });
     if (!r.ok) throw new Error(r.problems[0]!.message);
