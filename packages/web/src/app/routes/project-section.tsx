@@ -10,6 +10,8 @@ import { PageLoading } from "../../components/ui/spinner";
 
 const SketchSection = lazy(() => import("../../features/editor/sketch-section"));
 const PathsSection = lazy(() => import("../../features/paths/paths-section"));
+const BriefSection = lazy(() => import("../../features/intake/brief-section"));
+const MeasureSection = lazy(() => import("../../features/measurements/measure-section"));
 
 export function ProjectSectionRoute({ section }: { section: ProjectSection }) {
   const { projectId = "" } = useParams();
@@ -23,6 +25,15 @@ export function ProjectSectionRoute({ section }: { section: ProjectSection }) {
     return (
       <Suspense fallback={<PageLoading label="Opening the plan" />}>
         <SketchSection projectId={projectId} />
+      </Suspense>
+    );
+  }
+
+  if (section.slug === "brief" || section.slug === "measure") {
+    const Screen = section.slug === "brief" ? BriefSection : MeasureSection;
+    return (
+      <Suspense fallback={<PageLoading label={`Opening ${section.label}`} />}>
+        <Screen projectId={projectId} />
       </Suspense>
     );
   }
