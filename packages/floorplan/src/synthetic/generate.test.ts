@@ -28,3 +28,26 @@ describe("generateSyntheticBuilding", () => {
     expect([...types].sort()).toEqual(["flanking", "floor", "partition", "vent"]);
   });
 });
+
+import fc from "fast-check";
+import { parseNetwork, solveNetwork } from "@hushmark/acoustics";
+
+describe("builder on random synthetic buildings (property)", () => {
+  it("always gives a network the engine accepts and can solve", () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 2, max: 40 }), fc.integer({ min: 1, max: 3 }), fc.integer({ min: 0, max: 1e6 }), (rooms, levels, seed) => {
+        const plan = generateSyntheticBuilding({ rooms, levels, seed });
+        const r = buildNetwork(plan, constructionCatalogue, { sources: [{ type: "airborne", spaceId: "r0-0-0", levelsDb: new Array(21).fill(80) }] });
+        expect(r.ok).toBe(true);
+        if (!r.ok) return;
+        const parsed = parseNetwork(r.network);
+        expect(parsed.ok ? [] : parsed.issues.slice(0, 3)).toEqual([]);
+        if (!parsed.ok) return;
+        const receiver = elementsOfType(plan, "room").at(-1)!.id;
+        const solved = solveNetwork(parsed.value, { receiver, k: 2, gains: 2 });
+        expect(solved.levelsDb.every((l) => Number.isFinite(l) || l === -Infinity)).toBe(true);
+      }),
+      { numRuns: 25 },
+    );
+  });
+});
