@@ -9,7 +9,8 @@ import type { Problem } from "./problem.js";
 
 interface ConstructionUse {
   elementId: string;
-  what: string;
+  /** Worded only when there is something to report. */
+  what: () => string;
   id: string;
   expected: ConstructionCategory[];
 }
@@ -17,20 +18,20 @@ interface ConstructionUse {
 function constructionUses(plan: Plan): ConstructionUse[] {
   const d = plan.defaults;
   const uses: ConstructionUse[] = [
-    { elementId: "", what: "The plan's default interior wall", id: d.interiorWallConstructionId, expected: ["wall"] },
-    { elementId: "", what: "The plan's default exterior wall", id: d.exteriorWallConstructionId, expected: ["wall", "window"] },
-    { elementId: "", what: "The plan's default floor", id: d.floorConstructionId, expected: ["floor"] },
-    { elementId: "", what: "The plan's default ceiling", id: d.ceilingConstructionId, expected: ["ceiling", "floor"] },
+    { elementId: "", what: () => "The plan's default interior wall", id: d.interiorWallConstructionId, expected: ["wall"] },
+    { elementId: "", what: () => "The plan's default exterior wall", id: d.exteriorWallConstructionId, expected: ["wall", "window"] },
+    { elementId: "", what: () => "The plan's default floor", id: d.floorConstructionId, expected: ["floor"] },
+    { elementId: "", what: () => "The plan's default ceiling", id: d.ceilingConstructionId, expected: ["ceiling", "floor"] },
   ];
-  for (const w of elementsOfType(plan, "wall")) uses.push({ elementId: w.id, what: called(w, "Wall"), id: w.constructionId, expected: ["wall"] });
-  for (const o of elementsOfType(plan, "door")) uses.push({ elementId: o.id, what: called(o, "Door"), id: o.constructionId, expected: ["door"] });
-  for (const o of elementsOfType(plan, "window")) uses.push({ elementId: o.id, what: called(o, "Window"), id: o.constructionId, expected: ["window"] });
+  for (const w of elementsOfType(plan, "wall")) uses.push({ elementId: w.id, what: () => called(w, "Wall"), id: w.constructionId, expected: ["wall"] });
+  for (const o of elementsOfType(plan, "door")) uses.push({ elementId: o.id, what: () => called(o, "Door"), id: o.constructionId, expected: ["door"] });
+  for (const o of elementsOfType(plan, "window")) uses.push({ elementId: o.id, what: () => called(o, "Window"), id: o.constructionId, expected: ["window"] });
   for (const r of elementsOfType(plan, "room")) {
-    if (r.floor) uses.push({ elementId: r.id, what: `The floor of ${called(r, "room").toLowerCase()}`, id: r.floor.constructionId, expected: ["floor"] });
-    if (r.ceiling) uses.push({ elementId: r.id, what: `The ceiling of ${called(r, "room").toLowerCase()}`, id: r.ceiling.constructionId, expected: ["ceiling", "floor"] });
+    if (r.floor) uses.push({ elementId: r.id, what: () => `The floor of ${called(r, "room").toLowerCase()}`, id: r.floor.constructionId, expected: ["floor"] });
+    if (r.ceiling) uses.push({ elementId: r.id, what: () => `The ceiling of ${called(r, "room").toLowerCase()}`, id: r.ceiling.constructionId, expected: ["ceiling", "floor"] });
   }
   for (const [wallId, s] of Object.entries(plan.wallSettings).sort(([a], [b]) => (a < b ? -1 : 1))) {
-    if (s.constructionId) uses.push({ elementId: wallId, what: `Wall ${wallId}`, id: s.constructionId, expected: ["wall", "window"] });
+    if (s.constructionId) uses.push({ elementId: wallId, what: () => `Wall ${wallId}`, id: s.constructionId, expected: ["wall", "window"] });
   }
   return uses;
 }
@@ -41,9 +42,9 @@ export function catalogueProblems(plan: Plan, catalogue: Catalogue): Problem[] {
   for (const u of constructionUses(plan)) {
     const c = catalogue.constructions[u.id];
     if (!c) {
-      out.push(problem("unknown-construction", u.elementId, `${u.what} is set to construction “${u.id}”, which is not in the construction catalogue.`, "Pick a construction from the catalogue, or add this one to the firm's catalogue first."));
+      out.push(problem("unknown-construction", u.elementId, `${u.what()} is set to construction “${u.id}”, which is not in the construction catalogue.`, "Pick a construction from the catalogue, or add this one to the firm's catalogue first."));
     } else if (!u.expected.includes(c.category)) {
-      out.push(problem("construction-wrong-kind", u.elementId, `${u.what} uses “${c.name}”, which is catalogued as a ${c.category}, not a ${u.expected.join(" or ")}.`, "Check that the right construction was picked."));
+      out.push(problem("construction-wrong-kind", u.elementId, `${u.what()} uses “${c.name}”, which is catalogued as a ${c.category}, not a ${u.expected.join(" or ")}.`, "Check that the right construction was picked."));
     }
   }
   for (const r of elementsOfType(plan, "room")) {
