@@ -15,6 +15,7 @@ export interface BuildContext {
   freeWalls: FreeWall[];
 }
 
+/** The shared look-ups of one build: levels by elevation, rooms by id, free walls (no unit). */
 export function buildContext(plan: Plan, catalogue: Catalogue, pieces: WallPiece[]): BuildContext {
   return {
     plan,

@@ -4,6 +4,7 @@ import { THIRD_OCTAVE } from "@hushmark/acoustics";
 export const BANDS_HZ: readonly number[] = THIRD_OCTAVE.nominalHz;
 /** Exact mid-frequencies of the same bands, Hz (IEC 61260-1). */
 export const BANDS_EXACT_HZ: readonly number[] = THIRD_OCTAVE.exactHz;
+/** Number of bands in every catalogue curve (21). */
 export const BAND_COUNT = BANDS_HZ.length;
 
 /** Octave centres 63–8000 Hz, as catalogue sources publish them. */
