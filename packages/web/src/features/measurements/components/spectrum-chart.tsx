@@ -9,7 +9,7 @@ export interface SpectrumSeries {
 
 const W = 720;
 const H = 300;
-const M = { left: 44, right: 56, top: 14, bottom: 30 };
+const M = { left: 44, right: 56, top: 24, bottom: 30 };
 const F_MIN = 40;
 const F_MAX = 6300;
 const X_TICKS = [63, 125, 250, 500, 1000, 2000, 4000];
@@ -53,7 +53,7 @@ export function SpectrumChart({ series, showNc = true, title }: { series: Spectr
         <text x={W - M.right + 4} y={H - M.bottom + 16} fontSize="11" fill="#6b7080">
           Hz
         </text>
-        <text x={10} y={M.top + 8} fontSize="11" fill="#6b7080">
+        <text x={M.left - 6} y={12} fontSize="11" textAnchor="end" fill="#6b7080">
           dB
         </text>
         {showNc
@@ -63,10 +63,12 @@ export function SpectrumChart({ series, showNc = true, title }: { series: Spectr
                 const pts = c.points.filter((p) => p.hz <= F_MAX && p.db >= lo && p.db <= hi);
                 if (pts.length < 2) return null;
                 const last = pts[pts.length - 1]!;
+                // Labels sit in the right margin so they never cover the bars.
                 return (
                   <g key={c.nc} data-testid="nc-curve">
                     <polyline points={pts.map((p) => `${x(p.hz)},${y(p.db)}`).join(" ")} fill="none" stroke="#9aa0ad" strokeDasharray="4 3" strokeWidth="1" />
-                    <text x={x(last.hz) + 4} y={y(last.db) + 4} fontSize="10" fill="#6b7080">
+                    <line x1={x(last.hz)} x2={W - M.right} y1={y(last.db)} y2={y(last.db)} stroke="#9aa0ad" strokeDasharray="4 3" strokeWidth="1" />
+                    <text x={W - M.right + 4} y={y(last.db) + 4} fontSize="10" fill="#6b7080">
                       NC-{c.nc}
                     </text>
                   </g>

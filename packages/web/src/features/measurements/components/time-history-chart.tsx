@@ -17,7 +17,8 @@ export function TimeHistoryChart({ history, events, onPick }: { history: History
   for (let i = 0; i < n; i += step) {
     let max = -Infinity;
     for (let j = i; j < Math.min(n, i + step); j++) max = Math.max(max, history.laeqDb[j]!);
-    points.push({ t: i * history.stepS, db: max });
+    // Each value covers its interval, so it is drawn at the interval's middle.
+    points.push({ t: (i + Math.min(step, n - i) / 2) * history.stepS, db: max });
   }
   const duration = Math.max(1, n * history.stepS);
   const lo = Math.floor((Math.min(...history.laeqDb) - 3) / 10) * 10;
