@@ -78,3 +78,18 @@ export { constructionRatings, coveringDeltaLwDb } from "./catalogue/ratings.js";
 export { analysePlan, engineTarget } from "./analysis/analyse.js";
 export type { AnalysisRequest, AnalysisResult } from "./analysis/analyse.js";
 export { emptyPlan } from "./document/empty-plan.js";
+
+// Exchange: DXF import
+export { importDxf, dxfSurvey, planWithDxfImport, planFromDxfText } from "./exchange/dxf-import.js";
+export type { DxfSurvey } from "./exchange/dxf-import.js";
+export { dxfConverter, DXF_IMPORT_DEFAULTS } from "./exchange/dxf-convert.js";
+export type { DxfConverter } from "./exchange/dxf-convert.js";
+export { dxfSource, DxfChunkError } from "./exchange/dxf-read.js";
+export type { DxfSource, DxfEntity } from "./exchange/dxf-read.js";
+export type { DxfProblem } from "./exchange/dxf-scan.js";
+export { dxfUnitsFromHeader, dxfUnitsResolved, DXF_UNIT_CHOICES } from "./exchange/dxf-units.js";
+export type { DxfUnits, DxfUnitChoice } from "./exchange/dxf-units.js";
+export type { DxfImport, DxfImportOptions, DxfImportReport, DxfImportResult, DxfLayerRole, DxfReportLine, DxfUnderlay } from "./exchange/dxf-import-types.js";
+export type { TracedPath } from "./exchange/dxf-loops.js";
+export { arcPoints, bulgePoints, arcSegmentCount } from "./exchange/arc-flatten.js";
+export { exactPartGainsDb } from "./analysis/exact-gains.js";

@@ -1,0 +1,176 @@
+import type { IEntity } from "dxf-parser";
+import type { Point, Room } from "../document/schema.js";
+import { boundsM, pointInPolygon, polygonAreaM2, polygonCentroid, polygonSelfIntersections } from "../geometry/polygon.js";
+import { polygonOverlapM2 } from "../geometry/overlap.js";
+import { distanceToLineM } from "../geometry/segments.js";
+import { entityShape } from "./dxf-entities.js";
+import type { DxfImport, DxfImportOptions, DxfLayerRole } from "./dxf-import-types.js";
+import { closedLoops, type TracedPath } from "./dxf-loops.js";
+import { openingsFromDrawings, safeId } from "./dxf-openings.js";
+import { ReportLines } from "./dxf-report.js";
+import type { DxfUnits } from "./dxf-units.js";
+
+/** Defaults of the import options (m). */
+export const DXF_IMPORT_DEFAULTS = {
+  chordToleranceM: 0.01,
+  snapM: 0.005,
+  hostToleranceM: 0.3,
+  idPrefix: "dxf",
+  door: { heightM: 2.0, constructionId: "door-hollow-core" },
+  window: { heightM: 1.2, sillM: 0.9, constructionId: "glazing-double-4-16-4" },
+} as const;
+
+/** Smaller closed outlines are not rooms, m² (the plan's own zero-area threshold). */
+const MIN_ROOM_AREA_M2 = 0.01;
+
+/** An incremental DXF converter: feed it parsed entities chunk by chunk, then finish. */
+export interface DxfConverter {
+  /** Converts one chunk of entities; returns how many have been read so far. */
+  add(entities: readonly IEntity[]): number;
+  finish(): DxfImport;
+}
+
+/** Drops repeated corners and corners in a straight line with their neighbours (m). */
+function cleanOutline(points: readonly Point[], snapM: number): Point[] {
+  let pts = points.filter((p, i) => {
+    const q = points[(i + 1) % points.length]!;
+    return Math.hypot(q.x - p.x, q.y - p.y) > snapM;
+  });
+  let changed = true;
+  while (changed && pts.length > 3) {
+    changed = false;
+    for (let i = 0; i < pts.length; i++) {
+      const prev = pts[(i + pts.length - 1) % pts.length]!, next = pts[(i + 1) % pts.length]!;
+      if (distanceToLineM(pts[i]!, prev, next) < 1e-7) {
+        pts = pts.filter((_, k) => k !== i);
+        changed = true;
+        break;
+      }
+    }
+  }
+  return pts;
+}
+
+/**
+ * Starts an incremental conversion with resolved units (`metresPerUnit`): entities on walls
+ * layers become room outlines where they close, those on doors and windows layers openings on
+ * the nearest room edge, everything else kept is underlay, and every skip is reported.
+ */
+export function dxfConverter(options: DxfImportOptions, units: Extract<DxfUnits, { metresPerUnit: number }>): DxfConverter {
+  const o = { ...DXF_IMPORT_DEFAULTS, ...options };
+  const skipped = new ReportLines();
+  const toUnderlay = new ReportLines();
+  const byType: Record<string, { read: number; used: number; skipped: number }> = {};
+  const byRole: Record<Exclude<DxfLayerRole, "ignore">, TracedPath[]> = { walls: [], doors: [], windows: [], underlay: [] };
+  const labels: Array<{ text: string; at: Point }> = [];
+  let read = 0;
+  const roleOf = (layer: string): DxfLayerRole => o.layerRoles[layer] ?? o.otherLayers ?? "underlay";
+
+  function add(entities: readonly IEntity[]): number {
+    for (const entity of entities) {
+      read++;
+      const type = entity.type ?? "UNKNOWN";
+      const count = (byType[type] ??= { read: 0, used: 0, skipped: 0 });
+      count.read++;
+      const layer = entity.layer ?? "0";
+      const role = roleOf(layer);
+      const handle = entity.handle === undefined ? "" : String(entity.handle);
+      if (role === "ignore") {
+        count.skipped++;
+        skipped.add(`on layer "${layer}", set to ignore`, type, [handle]);
+        continue;
+      }
+      const shape = entityShape(entity, units.metresPerUnit, o.chordToleranceM);
+      if (shape.kind === "skip") {
+        count.skipped++;
+        skipped.add(shape.reason, type, [handle]);
+        continue;
+      }
+      count.used++;
+      if (shape.kind === "label") labels.push({ text: shape.text, at: shape.at });
+      else byRole[role].push({ layer, points: shape.points, closed: shape.closed, handles: handle ? [handle] : [] });
+    }
+    return read;
+  }
+
+  function finish(): DxfImport {
+    const candidates: TracedPath[] = byRole.walls.filter((p) => p.closed);
+    const { loops, leftover } = closedLoops(byRole.walls.filter((p) => !p.closed), o.snapM);
+    for (const p of leftover) toUnderlay.add("wall lines that do not close into an outline (or meet three or more at a point)", "path", p.handles);
+    const underlayPaths: TracedPath[] = [...byRole.underlay, ...leftover];
+    const outlines: Array<{ path: TracedPath; points: Point[]; areaM2: number }> = [];
+    for (const path of [...candidates, ...loops]) {
+      const points = cleanOutline(path.points, o.snapM);
+      const areaM2 = points.length >= 3 ? polygonAreaM2(points) : 0;
+      let reason: string | null = null;
+      if (areaM2 < MIN_ROOM_AREA_M2) reason = `a closed outline under ${MIN_ROOM_AREA_M2} m²`;
+      else if (polygonSelfIntersections(points).length > 0) reason = "a closed outline that crosses itself";
+      if (reason) {
+        toUnderlay.add(reason, "outline", path.handles);
+        underlayPaths.push(path);
+      } else outlines.push({ path, points, areaM2 });
+    }
+    // A closed outline around other outlines is the building's or a flat's edge, not a room; a copy is a duplicate.
+    outlines.sort((a, b) => b.areaM2 - a.areaM2);
+    const kept: typeof outlines = [];
+    outlines.forEach((a, i) => {
+      const ba = boundsM(a.points);
+      let encloses = false, duplicate = false;
+      for (let k = 0; k < outlines.length && !encloses; k++) {
+        if (k === i) continue;
+        const b = outlines[k]!;
+        const bb = boundsM(b.points);
+        if (bb.minX < ba.minX - o.snapM || bb.maxX > ba.maxX + o.snapM || bb.minY < ba.minY - o.snapM || bb.maxY > ba.maxY + o.snapM) continue;
+        const overlap = polygonOverlapM2(a.points, b.points);
+        if (overlap < 0.95 * b.areaM2) continue;
+        if (b.areaM2 >= 0.99 * a.areaM2) duplicate ||= k < i;
+        else encloses = true;
+      }
+      if (encloses || duplicate) {
+        toUnderlay.add(encloses ? "a closed outline around other outlines (a building or unit edge?)" : "a second copy of an outline", "outline", a.path.handles);
+        underlayPaths.push(a.path);
+      } else kept.push(a);
+    });
+    const ids = new Set<string>();
+    const usedLabels = new Set<number>();
+    const rooms: Room[] = kept
+      .sort((a, b) => ((a.path.handles[0] ?? "") < (b.path.handles[0] ?? "") ? -1 : 1))
+      .map((a, n) => {
+        let id = `${o.idPrefix}-room-${safeId(a.path.handles[0] ?? String(n + 1))}`;
+        for (let k = 2; ids.has(id); k++) id = `${o.idPrefix}-room-${safeId(a.path.handles[0] ?? "")}-${k}`;
+        ids.add(id);
+        const li = labels.findIndex((l, k) => !usedLabels.has(k) && pointInPolygon(l.at, a.points));
+        if (li >= 0) usedLabels.add(li);
+        return {
+          type: "room", id, levelId: o.levelId, name: li >= 0 ? labels[li]!.text : `Room ${n + 1}`, use: o.roomUse ?? "other",
+          outline: a.points.map((p, k) => ({ id: `v${k + 1}`, x: p.x, y: p.y })),
+        } satisfies Room;
+      });
+    const hostOpts = { snapM: o.snapM, hostToleranceM: o.hostToleranceM, idPrefix: o.idPrefix, door: o.door, window: o.window };
+    const doors = openingsFromDrawings("door", byRole.doors, rooms, hostOpts, toUnderlay);
+    const windows = openingsFromDrawings("window", byRole.windows, rooms, hostOpts, toUnderlay);
+    underlayPaths.push(...doors.leftover, ...windows.leftover);
+    const all = underlayPaths.flatMap((p) => p.points);
+    return {
+      rooms,
+      openings: [...doors.openings, ...windows.openings],
+      labels: labels.filter((_, k) => !usedLabels.has(k)),
+      underlay: { levelId: o.levelId, paths: underlayPaths, bounds: all.length ? boundsM(all) : null },
+      report: {
+        units,
+        chordToleranceM: o.chordToleranceM,
+        entitiesRead: read,
+        converted: { rooms: rooms.length, doors: doors.openings.length, windows: windows.openings.length, underlayPaths: underlayPaths.length, roomNames: usedLabels.size },
+        byType,
+        skipped: skipped.lines(),
+        toUnderlay: toUnderlay.lines(),
+      },
+    };
+  }
+  return { add, finish };
+}
+
+/** The centre of an imported room, for placing its label (m). */
+export function roomLabelPoint(room: Room): Point {
+  return polygonCentroid(room.outline);
+}
