@@ -47,8 +47,10 @@ describe("analysePlan against hand calculations", () => {
     if (!sealed.ok) throw new Error("sealed");
     expect(90 - sealed.result.levelsDb[10]! + 10 * Math.log10(10 / 20)).toBeCloseTo(27.0, 1);
     // The door (leaf and gap) carries most of the sound, the wall around it little.
-    expect(r.onPlan.elements[0]).toMatchObject({ elementId: "D", kind: "door" });
+    expect(r.onPlan.elements[0]).toMatchObject({ elementId: "D", kind: "door", gainExact: true });
     expect(r.onPlan.elements[0]!.share).toBeCloseTo((1.99e-2 + 0.01) / tauS, 3);
+    // A perfect door leaves only the 8 m² of wall: gain = 10·lg(τS before / τS after), one hop.
+    expect(r.onPlan.elements[0]!.gainIfPerfectDb).toBeCloseTo(10 * Math.log10(tauS / 8e-5), 6);
   });
 
   it("uses the receiving room's target and reports a missing receiver", () => {

@@ -5,6 +5,7 @@ import { sourceSpectrum } from "../catalogue/sources.js";
 import type { Catalogue } from "../catalogue/types.js";
 import type { Plan, Target } from "../document/schema.js";
 import { mapResultToPlan } from "../result/map-result.js";
+import { exactPartGainsDb } from "./exact-gains.js";
 import type { PlanResult } from "../result/types.js";
 import type { Problem } from "../validation/problem.js";
 
@@ -17,6 +18,8 @@ export interface AnalysisRequest {
   /** Defaults to the receiving room's own target, if it has one. */
   target?: Target;
   flanking?: boolean;
+  /** How many of the strongest door/window/gap/wall-part elements get an exact gain-if-perfect by re-solving (default 5). */
+  exactPartGains?: number;
 }
 
 export type AnalysisResult =
@@ -58,5 +61,15 @@ export function analysePlan(plan: Plan, catalogue: Catalogue, request: AnalysisR
   if (!parsed.ok) throw new Error(`builder produced an invalid network: ${parsed.issues.slice(0, 3).map((i) => `${i.path} ${i.message}`).join("; ")}`);
   const target = request.target ?? (rx.type === "room" ? rx.target : undefined);
   const result = solveNetwork(parsed.value, { receiver: request.receiver, k: request.k ?? 10, ...(target ? { target: engineTarget(target) } : {}) });
-  return { ok: true, result, onPlan: mapResultToPlan(plan, built, result), assumptions: built.assumptions, built };
+  const onPlan = mapResultToPlan(plan, built, result);
+  const estimated = onPlan.elements.filter((e) => !e.gainExact && e.kind !== "flanking" && e.share > 0).slice(0, request.exactPartGains ?? 5);
+  const exact = exactPartGainsDb(parsed.value, { receiver: request.receiver }, estimated.map((e) => ({ elementId: e.elementId, linkId: e.linkIds[0]! })));
+  for (const e of onPlan.elements) {
+    const g = exact.get(e.elementId);
+    if (g !== undefined && Number.isFinite(g)) {
+      e.gainIfPerfectDb = g;
+      e.gainExact = true;
+    }
+  }
+  return { ok: true, result, onPlan, assumptions: built.assumptions, built };
 }
