@@ -135,6 +135,38 @@ describe("brief, measurements, recordings and photos", () => {
     expect(files[0].n).toBe(0);
   });
 
+  it("stops reading an upload that grows past the limit without announcing its size (413)", async () => {
+    const boundary = "----hushmark-test-boundary";
+    const req = surveyor.post(`/api/v1/projects/${projectId}/recordings`).set("x-hushmark-upload", "1").set("content-type", `multipart/form-data; boundary=${boundary}`);
+    req.write(`--${boundary}\r\ncontent-disposition: form-data; name="file"; filename="endless.wav"\r\ncontent-type: audio/wav\r\n\r\n`);
+    for (let i = 0; i < 10; i++) req.write(Buffer.alloc(1024 * 1024, 7));
+    const res = await new Promise<supertest.Response>((resolve) => req.end((_err, r) => resolve(r)));
+    expect(res.status).toBe(413);
+    expect(res.body.error.message).toMatch(/8 MB limit/);
+  });
+
+  it("leaves no file and no record when an upload is cut off", async () => {
+    const { readdir } = await import("node:fs/promises");
+    const { tmpdir } = await import("node:os");
+    const dir = `${tmpdir()}/hushmark-uploads`;
+    const before = new Set(await readdir(dir).catch(() => []));
+    const boundary = "----hushmark-cut-boundary";
+    const req = surveyor.post(`/api/v1/projects/${projectId}/recordings`).set("x-hushmark-upload", "1").set("content-type", `multipart/form-data; boundary=${boundary}`);
+    req.on("error", () => undefined);
+    req.write(`--${boundary}\r\ncontent-disposition: form-data; name="file"; filename="cut.wav"\r\ncontent-type: audio/wav\r\n\r\n`);
+    req.write(toneWav({ seconds: 2, rate: 8000, channels: 1, depth: "16" }));
+    // The connection drops mid-file: no closing boundary ever arrives.
+    await new Promise((r) => setTimeout(r, 150));
+    const during = (await readdir(dir).catch(() => [])).filter((f) => !before.has(f));
+    expect(during).toHaveLength(1);
+    req.abort();
+    await new Promise((r) => setTimeout(r, 500));
+    const left = (await readdir(dir).catch(() => [])).filter((f) => !before.has(f));
+    expect(left).toEqual([]);
+    const files = await h.dataSource.query("SELECT count(*)::int AS n FROM stored_files WHERE project_id = $1", [projectId]);
+    expect(files[0].n).toBe(0);
+  });
+
   it("refuses an upload without the upload header as a cross-site form would send it", async () => {
     const res = await surveyor.post(`/api/v1/projects/${projectId}/recordings`).field("label", "x").attach("file", Buffer.from("RIFF"), "a.wav");
     expect(res.status).toBe(415);

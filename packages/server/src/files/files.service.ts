@@ -61,7 +61,21 @@ export function createFilesService(dataSource: DataSource, storage: ObjectStorag
     }
   }
 
-  return { store, fromDisk, remove, open };
+  /**
+   * Removes records a crash left in `receiving` (the record is written before the bytes), with any
+   * object that reached the store; answers how many were removed.
+   */
+  async function sweepUnfinished(olderThanMs: number): Promise<number> {
+    const repo = dataSource.getRepository(StoredFile);
+    const stale = await repo.createQueryBuilder("f").where("f.state = 'receiving' AND f.created_at < :before", { before: new Date(Date.now() - olderThanMs) }).getMany();
+    for (const f of stale) {
+      await storage.delete(f.objectKey).catch(() => undefined);
+      await repo.delete({ id: f.id });
+    }
+    return stale.length;
+  }
+
+  return { store, fromDisk, remove, open, sweepUnfinished };
 }
 
 export type FilesService = ReturnType<typeof createFilesService>;

@@ -26,6 +26,7 @@ export function createMeasurementsModule(deps: { dataSource: DataSource; config:
   const { dataSource, config, logger, projects } = deps;
   const storage = deps.options?.storage ?? createObjectStorage(config.s3);
   const files = createFilesService(dataSource, storage);
+  files.sweepUnfinished(3600_000).catch((error: unknown) => logger.warn({ err: error }, "could not sweep unfinished uploads"));
   const queue = recordingQueue(dataSource, files, logger, deps.options?.recordingJob);
   const jobs = createJobQueue({ databaseUrl: config.databaseUrl, schema: config.jobsSchema, logger, queues: [queue as QueueSpec<never>] });
   const measurements = createMeasurementsService(dataSource, projects, files, jobs);
