@@ -93,3 +93,7 @@ export type { DxfImport, DxfImportOptions, DxfImportReport, DxfImportResult, Dxf
 export type { TracedPath } from "./exchange/dxf-loops.js";
 export { arcPoints, bulgePoints, arcSegmentCount } from "./exchange/arc-flatten.js";
 export { exactPartGainsDb } from "./analysis/exact-gains.js";
+// Exchange: DXF export
+export { planToDxf, dxfExportLayerRoles, DXF_EXPORT_LAYERS } from "./exchange/dxf-export.js";
+export type { DxfExportOptions } from "./exchange/dxf-export.js";
+export { interiorPointM, bandCornersM } from "./exchange/plan-points.js";
