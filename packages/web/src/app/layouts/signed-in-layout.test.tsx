@@ -66,8 +66,8 @@ describe("the signed-in layout", () => {
     // A staff-only section typed into the address bar explains itself instead of showing.
     await router.navigate(`/projects/${project.id}/options`);
     expect(await screen.findByText("Options is for the firm's team")).toBeTruthy();
-    await router.navigate(`/projects/${project.id}/paths`);
-    expect(await screen.findByRole("heading", { name: "Paths" })).toBeTruthy();
+    await router.navigate(`/projects/${project.id}/proposal`);
+    expect(await screen.findByRole("heading", { name: "Proposal" })).toBeTruthy();
   });
 
   it("offers a retry when the session check fails for another reason than signing out", async () => {
