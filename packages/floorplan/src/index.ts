@@ -97,3 +97,8 @@ export { exactPartGainsDb } from "./analysis/exact-gains.js";
 export { planToDxf, dxfExportLayerRoles, DXF_EXPORT_LAYERS } from "./exchange/dxf-export.js";
 export type { DxfExportOptions } from "./exchange/dxf-export.js";
 export { interiorPointM, bandCornersM } from "./exchange/plan-points.js";
+// Exchange: GeoJSON export
+export { planToGeoJson } from "./exchange/geojson-export.js";
+export type { LevelFeatureCollection, PlanFeature } from "./exchange/geojson-export.js";
+export { geoFrame, planToLonLat, lonLatToPlan, wgs84RadiiM } from "./exchange/geo-frame.js";
+export type { GeoFrame, SiteLocation } from "./exchange/geo-frame.js";
