@@ -26,13 +26,11 @@ export async function getPlan(page: Page, baseUrl: string, projectId: string): P
 
 /** Screen position (page pixels) of a plan point (m), read from the canvas's view transform. */
 export async function planToPage(page: Page, x: number, y: number): Promise<{ x: number; y: number }> {
-  return page.getByTestId("plan-canvas").evaluate((el, p) => {
-    const r = el.getBoundingClientRect();
-    const scale = Number(el.getAttribute("data-scale"));
-    const ox = Number(el.getAttribute("data-ox"));
-    const oy = Number(el.getAttribute("data-oy"));
-    return { x: r.left + ox + p.x * scale, y: r.top + oy - p.y * scale };
-  }, { x, y });
+  const canvas = page.getByTestId("plan-canvas");
+  const box = await canvas.boundingBox();
+  if (!box) throw new Error("the plan canvas is not on screen");
+  const [scale, ox, oy] = await Promise.all(["data-scale", "data-ox", "data-oy"].map(async (name) => Number(await canvas.getAttribute(name))));
+  return { x: box.x + ox! + x * scale!, y: box.y + oy! - y * scale! };
 }
 
 /** Drags with the mouse between two plan points, in steps like a hand would. */

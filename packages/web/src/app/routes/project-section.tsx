@@ -1,4 +1,6 @@
-import { lazy, Suspense } from "react";
+import { lazy, Suspense, useEffect } from "react";
+import { useQueryClient } from "@tanstack/react-query";
+import { planQueryOptions } from "../../features/projects/api/get-plan";
 import { useParams } from "react-router-dom";
 import { EmptyState } from "../../components/ui/empty-state";
 import { useCurrentMe } from "../../features/auth/components/use-current-me";
@@ -16,6 +18,12 @@ const MeasureSection = lazy(() => import("../../features/measurements/measure-se
 export function ProjectSectionRoute({ section }: { section: ProjectSection }) {
   const { projectId = "" } = useParams();
   const me = useCurrentMe();
+  // The plan starts loading while the editor's code does, not after it.
+  const queryClient = useQueryClient();
+  const needsPlan = section.slug === "sketch" || section.slug === "paths";
+  useEffect(() => {
+    if (needsPlan && projectId) void queryClient.prefetchQuery(planQueryOptions(projectId));
+  }, [needsPlan, projectId, queryClient]);
 
   if (!section.clientVisible && !can.seeAllSections(me.membership.role)) {
     return <EmptyState title={`${section.label} is for the firm's team`}>Your contractor shares the plan, the sound paths, the proposal and the verification with you.</EmptyState>;

@@ -1,10 +1,11 @@
-import { memo } from "react";
+import { forwardRef, memo } from "react";
+import type Konva from "konva";
 import { Layer, Line } from "react-konva";
 import type { Viewport } from "../model/viewport";
 import { rule } from "./colours";
 
 /** The background grid: 1 m lines, with 0.5 m between them when zoomed in; never listens for events. */
-export const GridLayer = memo(function GridLayer({ v, width, height }: { v: Viewport; width: number; height: number }) {
+export const GridLayer = memo(forwardRef<Konva.Layer, { v: Viewport; width: number; height: number }>(function GridLayer({ v, width, height }, ref) {
   const stepM = v.scale >= 60 ? 0.5 : v.scale >= 15 ? 1 : 5;
   const step = stepM * v.scale;
   const lines = [];
@@ -18,5 +19,5 @@ export const GridLayer = memo(function GridLayer({ v, width, height }: { v: View
     const m = Math.round((v.oy - y) / v.scale / stepM) * stepM;
     lines.push(<Line key={`y${i}`} points={[0, y, width, y]} stroke={rule} strokeWidth={Math.abs(m % 5) < 1e-6 ? 1 : 0.5} opacity={0.7} />);
   }
-  return <Layer listening={false}>{lines}</Layer>;
-});
+  return <Layer ref={ref} listening={false}>{lines}</Layer>;
+}));

@@ -7,10 +7,11 @@ import { brand, ink, muted, panel } from "./colours";
  * Text in screen pixels: room names and areas, pins as rings with their label, notes. Placed at
  * (x·scale, −y·scale) inside a group that carries only the pan offset, so panning never redraws it.
  */
-export const LabelsGroup = memo(function LabelsGroup({ plan, levelId, scale, unit }: { plan: Plan; levelId: string; scale: number; unit: "metric" | "imperial" }) {
-  const rooms = elementsOfType(plan, "room").filter((r) => r.levelId === levelId && r.outline.length >= 3);
-  const pins = elementsOfType(plan, "pin").filter((p) => p.levelId === levelId);
-  const notes = elementsOfType(plan, "note").filter((n) => n.levelId === levelId);
+export const LabelsGroup = memo(function LabelsGroup({ plan, levelId, scale, unit, only, exclude }: { plan: Plan; levelId: string; scale: number; unit: "metric" | "imperial"; only?: ReadonlySet<string>; exclude?: ReadonlySet<string> }) {
+  const keep = (id: string) => (only ? only.has(id) : !exclude?.has(id));
+  const rooms = elementsOfType(plan, "room").filter((r) => r.levelId === levelId && r.outline.length >= 3 && keep(r.id));
+  const pins = elementsOfType(plan, "pin").filter((p) => p.levelId === levelId && keep(p.id));
+  const notes = elementsOfType(plan, "note").filter((n) => n.levelId === levelId && keep(n.id));
   const showArea = scale >= 25;
   return (
     <Group listening={false}>

@@ -4,14 +4,17 @@ import type Konva from "konva";
 import type { Plan, Problem } from "@hushmark/floorplan";
 import type { Tool } from "@hushmark/editor-core";
 import type { Viewport } from "../model/viewport";
-import { ElementsGroup } from "./elements-group";
+import { ElementsGroup, MovingGroup, changedIds } from "./elements-group";
 import { LabelsGroup } from "./labels-group";
 import { GridLayer } from "./grid-layer";
 import { UiGroup } from "./ui-group";
 import { usePointerGestures } from "./use-pointer-gestures";
+import { useCompositedView } from "./use-composited-view";
 
 export interface PlanCanvasProps {
   plan: Plan;
+  /** The plan at pointer-down while a drag is previewing; the drawing stays on it except for what moves. */
+  basePlan?: Plan | null;
   levelId: string;
   /** The level below, drawn faintly so rooms can be stacked over it. */
   ghostLevelId?: string | null;
@@ -24,8 +27,8 @@ export interface PlanCanvasProps {
   tool: Tool | null;
   /** The analysis overlay, drawn in plan metres above the elements. */
   overlay?: ReactNode;
-  /** Labels for the overlay, in screen pixels. */
-  overlayLabels?: ReactNode;
+  /** Labels for the overlay, in screen pixels for the view it is drawn at. */
+  overlayLabels?: (drawnView: Viewport) => ReactNode;
   onKeyDown?: (e: React.KeyboardEvent<HTMLDivElement>) => void;
   label: string;
   cursor?: string;
@@ -41,9 +44,25 @@ export interface PlanCanvasHandle {
  * is editor-core's, so no Konva node listens for events; the wrapper div takes the pointer.
  */
 export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function PlanCanvas(props, ref) {
-  const { plan, levelId, ghostLevelId, selection, problems, viewport: v, setViewport, width, height, tool, overlay, overlayLabels, onKeyDown, label, cursor } = props;
+  const { plan, basePlan, levelId, ghostLevelId, selection, problems, viewport: v, setViewport, width, height, tool, overlay, overlayLabels, onKeyDown, label, cursor } = props;
   const stageRef = useRef<Konva.Stage>(null);
+  const gridRef = useRef<Konva.Layer>(null);
+  const elementsRef = useRef<Konva.Layer>(null);
+  const overlayRef = useRef<Konva.Layer>(null);
+  // The heavy layers draw at `d` and are moved by the compositor until the view settles at `v`.
+  const d = useCompositedView(v, [gridRef, elementsRef, overlayRef]);
   const [, setTick] = useState(0);
+  const movingRef = useRef<{ key: string; ids: ReadonlySet<string> }>({ key: "", ids: new Set() });
+  if (basePlan) {
+    const ids = changedIds(basePlan, plan);
+    const key = [...ids].sort().join(",");
+    // Same set, same object: the static group's props stay equal, so its layer is not redrawn.
+    if (key !== movingRef.current.key) movingRef.current = { key, ids };
+  } else if (movingRef.current.key) {
+    movingRef.current = { key: "", ids: new Set() };
+  }
+  const moving = movingRef.current.ids;
+  const drawnPlan = basePlan && moving.size ? basePlan : plan;
   useImperativeHandle(ref, () => ({ stage: () => stageRef.current }), []);
   const gestures = usePointerGestures({ viewport: v, setViewport, tool, onToolEvent: () => setTick((t) => t + 1) });
 
@@ -79,22 +98,30 @@ export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function
       }}
     >
       <Stage ref={stageRef} width={width} height={height} listening={false}>
-        <GridLayer v={v} width={width} height={height} />
+        <GridLayer ref={gridRef} v={d} width={width} height={height} />
+        <Layer ref={elementsRef} listening={false}>
+          <Group x={d.ox} y={d.oy} scaleX={d.scale} scaleY={-d.scale}>
+            {ghostLevelId ? <ElementsGroup plan={drawnPlan} levelId={ghostLevelId} scale={d.scale} ghost /> : null}
+            <ElementsGroup plan={drawnPlan} levelId={levelId} exclude={moving} scale={d.scale} />
+          </Group>
+        </Layer>
+        <Layer ref={overlayRef} listening={false}>
+          <Group x={d.ox} y={d.oy} scaleX={d.scale} scaleY={-d.scale}>{overlay}</Group>
+          {/* Names stay above the analysis colours so they can always be read. */}
+          <Group x={d.ox} y={d.oy}>
+            <LabelsGroup plan={drawnPlan} levelId={levelId} scale={d.scale} unit={plan.displayUnit} exclude={moving} />
+          </Group>
+          {overlayLabels?.(d)}
+        </Layer>
         <Layer listening={false}>
           <Group x={v.ox} y={v.oy} scaleX={v.scale} scaleY={-v.scale}>
-            {ghostLevelId ? <ElementsGroup plan={plan} levelId={ghostLevelId} ghost /> : null}
-            <ElementsGroup plan={plan} levelId={levelId} />
+            <MovingGroup plan={plan} levelId={levelId} ids={moving} scale={v.scale} />
           </Group>
-        </Layer>
-        <Layer listening={false}>
-          <Group x={v.ox} y={v.oy} scaleX={v.scale} scaleY={-v.scale}>{overlay}</Group>
-          {/* Names stay above the analysis colours so they can always be read. */}
-          <Group x={v.ox} y={v.oy}>
-            <LabelsGroup plan={plan} levelId={levelId} scale={v.scale} unit={plan.displayUnit} />
-          </Group>
-          {overlayLabels}
-        </Layer>
-        <Layer listening={false}>
+          {moving.size ? (
+            <Group x={v.ox} y={v.oy}>
+              <LabelsGroup plan={plan} levelId={levelId} scale={v.scale} unit={plan.displayUnit} only={moving} />
+            </Group>
+          ) : null}
           <UiGroup plan={plan} selection={selection} problems={problems} overlay={tool?.overlay ?? {}} v={v} />
         </Layer>
       </Stage>

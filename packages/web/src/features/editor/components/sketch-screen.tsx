@@ -1,6 +1,6 @@
-import { useCallback, useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { createTool, planBounds, boundsOfMany, setPlanUnit, type Clip, type ToolEnv, type ToolId } from "@hushmark/editor-core";
-import { constructionCatalogue, levelsByElevation, validatePlan } from "@hushmark/floorplan";
+import { levelsByElevation } from "@hushmark/floorplan";
 import type { PlanResponse } from "@hushmark/schemas";
 import { PlanCanvas, type PlanCanvasHandle } from "../canvas/plan-canvas";
 import { fitBounds, type Viewport } from "../model/viewport";
@@ -9,6 +9,7 @@ import { useElementSize, useFillHeight } from "../hooks/use-element-size";
 import { useHistoryLabels, usePlan, useSelection } from "../hooks/use-store-value";
 import { editorKeyHandler } from "../hooks/use-editor-keys";
 import { useConflict } from "../hooks/use-conflict";
+import { useProblems } from "../hooks/use-problems";
 import { ToolRail } from "./tool-rail";
 import { StatusLine } from "./status-line";
 import { DetailsPanel } from "../panels/details-panel";
@@ -57,8 +58,9 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
   const tool = useMemo(() => (readOnly ? null : createTool(toolId, envRef.current)), [toolId, readOnly]);
   useEffect(() => () => tool?.cancel(), [tool]);
 
-  const deferredPlan = useDeferredValue(plan);
-  const problems = useMemo(() => validatePlan(deferredPlan, constructionCatalogue), [deferredPlan]);
+  // A drag's previews are not checked: the plan at pointer-down stands until the drag is released.
+  const basePlan = store.transactionBase;
+  const problems = useProblems(basePlan ?? plan);
   const counts = { errors: problems.filter((p) => p.severity === "error").length, warnings: problems.filter((p) => p.severity === "warning").length };
 
   const zoomTo = (id: string) => {
@@ -95,6 +97,7 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
               <PlanCanvas
                 ref={canvasRef}
                 plan={plan}
+                basePlan={basePlan}
                 levelId={levelId}
                 ghostLevelId={levelBelow(plan, levelId)}
                 selection={selection}

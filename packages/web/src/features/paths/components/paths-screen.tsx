@@ -127,7 +127,7 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
               label={`Marked-up plan of ${title}: elements coloured by their share of the sound reaching ${result?.receiver.name ?? "the room"}. The list beside it gives the same information.`}
               cursor="grab"
               overlay={result ? <ShareOverlay plan={plan} levelId={levelId} elements={result.elements} scale={viewport.scale} dimmed={stale} /> : null}
-              overlayLabels={result ? <PathLines result={result} levelId={levelId} v={viewport} dimmed={stale} highlight={highlight} /> : null}
+              overlayLabels={result ? (drawnView) => <PathLines result={result} levelId={levelId} v={drawnView} dimmed={stale} highlight={highlight} /> : undefined}
             />
             <div className="pointer-events-none absolute bottom-2 left-2 right-2 flex flex-wrap items-center gap-x-3 gap-y-1 rounded-md border border-rule bg-panel/95 px-2 py-1 text-[12px] shadow-sm" aria-label="Colour legend">
               <p className="font-semibold">{plain ? "Share of what you hear" : "Share of the sound reaching the room"}</p>
