@@ -46,6 +46,8 @@ export const recordingFieldsSchema = z.object({
   device: meta.device,
   calibrationDb: z.coerce.number("The calibration offset is a number of dB.").min(-60, "A calibration offset is between −60 and +200 dB.").max(200, "A calibration offset is between −60 and +200 dB.").default(0),
   roomId: z.string().trim().max(100).optional().transform((v) => v || null),
+  pointX: z.coerce.number("The pin's x is a number of metres.").finite().optional(),
+  pointY: z.coerce.number("The pin's y is a number of metres.").finite().optional(),
   marginDb: z.coerce.number().min(1, "The event margin is at least 1 dB.").max(40, "The event margin is at most 40 dB.").default(10),
   minDurationS: z.coerce.number().min(1, "An event lasts at least 1 s.").max(3600, "An event lasts at most an hour.").default(2),
 });

@@ -22,7 +22,7 @@ function toneWav(opts: { seconds: number; rate: number; channels: 1 | 2; depth: 
   return Buffer.from(w.toBuffer());
 }
 
-const fields = { label: "Night by the party wall", kind: "receiver_side", takenAt: "2026-05-01T23:00:00Z", calibrationDb: "94", device: "recorder" };
+const fields = { label: "Night by the party wall", kind: "receiver_side", takenAt: "2026-05-01T23:00:00Z", calibrationDb: "94", device: "recorder", roomId: "room-booth", pointX: "2.5", pointY: "1" };
 
 function upload(agent: supertest.Agent, projectId: string, file: Buffer, name: string, extra: Record<string, string> = fields) {
   const req = agent.post(`/api/v1/projects/${projectId}/recordings`).set("x-hushmark-upload", "1");
@@ -188,6 +188,8 @@ describe("brief, measurements, recordings and photos", () => {
     expect(Math.abs(done.lmaxDb[13] - 74)).toBeLessThan(0.5);
     expect(done.summary.durationS).toBeCloseTo(20, 1);
     expect(done.summary.channels).toBe(2);
+    expect(done.roomId).toBe("room-booth");
+    expect(done.point).toEqual({ x: 2.5, y: 1 });
     expect(done.events).toHaveLength(1);
     expect(Math.abs(done.events[0].startS - 8)).toBeLessThanOrEqual(1);
     expect(done.events[0].dominantBandHz).toBe(1000);

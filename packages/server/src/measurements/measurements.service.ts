@@ -131,7 +131,7 @@ export function createMeasurementsService(dataSource: DataSource, projects: Proj
       measurement = await dataSource.transaction(async (manager) => {
         const m = await manager.getRepository(Measurement).save(manager.getRepository(Measurement).create({
           organizationId: actor.organizationId, projectId, label: fields.label, kind: fields.kind, source: "recording", status: "processing", progress: 0,
-          takenAt: new Date(fields.takenAt), roomId: fields.roomId, point: null, device: fields.device, calibrationDb: fields.calibrationDb,
+          takenAt: new Date(fields.takenAt), roomId: fields.roomId, point: fields.pointX !== undefined && fields.pointY !== undefined ? { x: fields.pointX, y: fields.pointY } : null, device: fields.device, calibrationDb: fields.calibrationDb,
           leqDb: [], lmaxDb: null, fileId: stored.id, createdById: actor.userId, error: null,
           eventSettings: { marginDb: fields.marginDb, minDurationS: fields.minDurationS },
         }));

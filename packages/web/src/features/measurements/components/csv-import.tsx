@@ -4,11 +4,13 @@ import { Button } from "../../../components/ui/button";
 import { Card, CardHeader } from "../../../components/ui/card";
 import { isApiError } from "../../../lib/api-client";
 import { createMeasurement, previewCsv } from "../api/measurements";
-import { emptyMeta, isoOf, MeasurementMetaFields, type MetaValues } from "./measurement-meta-fields";
+import { usePlanPlaces } from "../api/plan-places";
+import { emptyMeta, isoOf, MeasurementMetaFields, pointOf, type MetaValues } from "./measurement-meta-fields";
 import { formatHz } from "./spectrum-math";
 
 /** A spectrum file: read it, show what could and could not be read, save only on confirmation. */
 export function CsvImport({ projectId, onSaved, onClose }: { projectId: string; onSaved: (id: string) => void; onClose: () => void }) {
+  const places = usePlanPlaces(projectId);
   const [preview, setPreview] = useState<CsvPreview | null>(null);
   const [meta, setMeta] = useState<MetaValues>(emptyMeta("Spectrum from a file"));
   const [error, setError] = useState<string | null>(null);
@@ -36,7 +38,7 @@ export function CsvImport({ projectId, onSaved, onClose }: { projectId: string; 
     setFieldErrors({});
     try {
       const m = await createMeasurement(projectId, {
-        label: meta.label, kind: meta.kind, takenAt: isoOf(meta.takenAt), roomId: meta.roomId || null, device: meta.device, source: "csv", leqDb: preview.leqDb, lmaxDb: preview.lmaxDb,
+        label: meta.label, kind: meta.kind, takenAt: isoOf(meta.takenAt), roomId: meta.roomId || null, point: meta.roomId ? pointOf(places, meta.roomId) : null, device: meta.device, source: "csv", leqDb: preview.leqDb, lmaxDb: preview.lmaxDb,
       });
       onSaved(m.id);
     } catch (e) {
@@ -89,7 +91,7 @@ export function CsvImport({ projectId, onSaved, onClose }: { projectId: string; 
             </div>
             {preview.ok ? (
               <>
-                <MeasurementMetaFields value={meta} onChange={setMeta} errors={fieldErrors} />
+                <MeasurementMetaFields value={meta} onChange={setMeta} places={places} errors={fieldErrors} />
                 <div className="flex gap-3">
                   <Button onClick={() => void save()} pending={busy}>Save {preview.rows.length} bands as a measurement</Button>
                   <Button variant="secondary" onClick={() => setPreview(null)}>Discard</Button>

@@ -4,7 +4,8 @@ import { Button } from "../../../components/ui/button";
 import { Card, CardHeader } from "../../../components/ui/card";
 import { Input } from "../../../components/ui/field";
 import { createMeasurement } from "../api/measurements";
-import { emptyMeta, isoOf, MeasurementMetaFields, type MetaValues } from "./measurement-meta-fields";
+import { usePlanPlaces } from "../api/plan-places";
+import { emptyMeta, isoOf, MeasurementMetaFields, pointOf, type MetaValues } from "./measurement-meta-fields";
 import { SpectrumChart } from "./spectrum-chart";
 
 interface Capture {
@@ -20,6 +21,7 @@ interface Capture {
  * Leq and peak hold as a measurement.
  */
 export function LiveAnalyzer({ projectId, onSaved, onClose }: { projectId: string; onSaved: (id: string) => void; onClose: () => void }) {
+  const places = usePlanPlaces(projectId);
   const [offset, setOffset] = useState("100");
   const [snap, setSnap] = useState<BandSnapshot | null>(null);
   const [running, setRunning] = useState(false);
@@ -69,7 +71,7 @@ export function LiveAnalyzer({ projectId, onSaved, onClose }: { projectId: strin
     setSaving(true);
     try {
       const m = await createMeasurement(projectId, {
-        label: meta.label, kind: meta.kind, takenAt: isoOf(meta.takenAt), roomId: meta.roomId || null, device: meta.device || "Browser microphone (uncalibrated)", calibrationDb: calibration,
+        label: meta.label, kind: meta.kind, takenAt: isoOf(meta.takenAt), roomId: meta.roomId || null, point: meta.roomId ? pointOf(places, meta.roomId) : null, device: meta.device || "Browser microphone (uncalibrated)", calibrationDb: calibration,
         source: "live", leqDb: snap.leqDb, lmaxDb: snap.lmaxDb,
       });
       onSaved(m.id);
@@ -100,7 +102,7 @@ export function LiveAnalyzer({ projectId, onSaved, onClose }: { projectId: strin
         {snap && !running ? (
           <div className="flex flex-col gap-3 border-t border-rule pt-4">
             <h3 className="text-sm font-semibold">Save this capture (Leq over {Math.round(snap.durationS)} s and the peak hold)</h3>
-            <MeasurementMetaFields value={meta} onChange={setMeta} />
+            <MeasurementMetaFields value={meta} onChange={setMeta} places={places} />
             <div><Button onClick={() => void save()} pending={saving}>Save as a measurement</Button></div>
           </div>
         ) : null}

@@ -4,6 +4,7 @@ import { Card, CardHeader } from "../../../components/ui/card";
 import { ErrorState } from "../../../components/ui/error-state";
 import { Spinner } from "../../../components/ui/spinner";
 import { audioUrl, csvUrl, useMeasurement } from "../api/measurements";
+import { usePlanPlaces } from "../api/plan-places";
 import { PhotosPanel } from "./photos-panel";
 import { ProgressBar } from "./progress-bar";
 import { SpectrumChart } from "./spectrum-chart";
@@ -14,6 +15,7 @@ import { TimeHistoryChart } from "./time-history-chart";
 export function MeasurementDetail({ projectId, id, canEdit, onDelete }: { projectId: string; id: string; canEdit: boolean; onDelete: () => void }) {
   const q = useMeasurement(projectId, id);
   const [playing, setPlaying] = useState<number | null>(null);
+  const places = usePlanPlaces(projectId);
   if (q.isPending) return <Card className="p-6"><Spinner label="Loading the measurement" /></Card>;
   if (q.isError) return <ErrorState title="The measurement did not load" error={q.error} onRetry={() => void q.refetch()} />;
   const m = q.data;
@@ -23,7 +25,7 @@ export function MeasurementDetail({ projectId, id, canEdit, onDelete }: { projec
     <Card>
       <CardHeader
         title={m.label}
-        description={`${kindLabels[m.kind]} · ${new Date(m.takenAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })}${m.roomId ? ` · ${m.roomId}` : ""}${m.device ? ` · ${m.device}` : ""}`}
+        description={`${kindLabels[m.kind]} · ${new Date(m.takenAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })}${m.roomId ? ` · ${places.nameOf(m.roomId)}` : ""}${m.device ? ` · ${m.device}` : ""}`}
         actions={
           <div className="flex items-center gap-2">
             {m.status === "ready" ? <a className="inline-flex min-h-11 items-center rounded-md border border-rule px-3 text-sm font-medium hover:border-muted" href={csvUrl(projectId, m.id)} download>Export CSV</a> : null}
@@ -83,7 +85,7 @@ export function MeasurementDetail({ projectId, id, canEdit, onDelete }: { projec
             ) : null}
           </section>
         ) : null}
-        <PhotosPanel projectId={projectId} measurementId={m.id} canEdit={canEdit} />
+        <PhotosPanel projectId={projectId} measurementId={m.id} canEdit={canEdit} places={places} />
       </div>
     </Card>
   );

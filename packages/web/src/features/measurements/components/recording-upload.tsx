@@ -3,11 +3,15 @@ import { Button } from "../../../components/ui/button";
 import { Card, CardHeader } from "../../../components/ui/card";
 import { isApiError } from "../../../lib/api-client";
 import { uploadRecording, useMeasurement } from "../api/measurements";
-import { emptyMeta, isoOf, MeasurementMetaFields, type MetaValues } from "./measurement-meta-fields";
+import { usePlanPlaces } from "../api/plan-places";
+import { emptyMeta, isoOf, MeasurementMetaFields, pointOf, type MetaValues } from "./measurement-meta-fields";
 import { ProgressBar } from "./progress-bar";
+
+const pinFields = (p: { x: number; y: number } | null): Record<string, string> => (p ? { pointX: String(p.x), pointY: String(p.y) } : {});
 
 /** A WAV recording: upload with a progress bar, then the analysis job's progress until it is ready. */
 export function RecordingUpload({ projectId, onDone, onClose }: { projectId: string; onDone: (id: string) => void; onClose: () => void }) {
+  const places = usePlanPlaces(projectId);
   const [file, setFile] = useState<File | null>(null);
   const [meta, setMeta] = useState<MetaValues>(emptyMeta("Recording", "100"));
   const [sent, setSent] = useState<number | null>(null);
@@ -22,7 +26,7 @@ export function RecordingUpload({ projectId, onDone, onClose }: { projectId: str
     setFieldErrors({});
     setSent(0);
     try {
-      const m = await uploadRecording(projectId, file, { label: meta.label, kind: meta.kind, takenAt: isoOf(meta.takenAt), roomId: meta.roomId, device: meta.device, calibrationDb: meta.calibrationDb || "0" }, setSent);
+      const m = await uploadRecording(projectId, file, { label: meta.label, kind: meta.kind, takenAt: isoOf(meta.takenAt), roomId: meta.roomId, device: meta.device, calibrationDb: meta.calibrationDb || "0", ...pinFields(pointOf(places, meta.roomId)) }, setSent);
       setMeasurementId(m.id);
     } catch (e) {
       setSent(null);
@@ -42,7 +46,7 @@ export function RecordingUpload({ projectId, onDone, onClose }: { projectId: str
         </label>
         {sent === null ? (
           <>
-            <MeasurementMetaFields value={meta} onChange={setMeta} errors={fieldErrors} showCalibration calibrationHint="Added to the file's level (dB re full scale). Use the value from a calibrator tone; about 100 dB is typical of small recorders, but only a calibration tells." />
+            <MeasurementMetaFields value={meta} onChange={setMeta} places={places} errors={fieldErrors} showCalibration calibrationHint="Added to the file's level (dB re full scale). Use the value from a calibrator tone; about 100 dB is typical of small recorders, but only a calibration tells." />
             <div><Button onClick={() => void start()} disabled={!file}>Upload and analyse</Button></div>
           </>
         ) : (
