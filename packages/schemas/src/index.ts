@@ -9,3 +9,7 @@ export * from "./catalogue.js";
 export * from "./intake.js";
 export * from "./measurements.js";
 export { isWeakPassword } from "./weak-passwords.js";
+export * from "./price-book.js";
+export * from "./scenarios.js";
+export * from "./proposals.js";
+export * from "./work-orders.js";

@@ -30,6 +30,7 @@ import { createPlansService, type PlanDocumentCheck } from "./plans/plans.servic
 import { projectsRouter } from "./projects/projects.router.js";
 import { createProjectsService, type EmptyPlanFactory } from "./projects/projects.service.js";
 import { createMeasurementsModule, type MeasurementsModuleOptions } from "./measurements/measurements.module.js";
+import { createMoneyModule, type MoneyModuleOptions } from "./money/money.module.js";
 
 export { loadConfig, type AppConfig } from "./config.js";
 export { createDataSource } from "./data-source.js";
@@ -47,6 +48,7 @@ export interface AppDeps {
   checkPlan?: PlanDocumentCheck;
   analysisPool?: AnalysisPool;
   measurements?: MeasurementsModuleOptions;
+  money?: MoneyModuleOptions;
 }
 
 const PLAN_PUT = /^\/v1\/projects\/[^/]+\/plan$/;
@@ -86,6 +88,8 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === "/api/v1/health" } }));
   app.use(cookieParser());
 
+  const beforeJson = express.Router(); // the payment webhook verifies its raw body
+  app.use("/api/v1", beforeJson);
   const small = express.json({ limit: "256kb" });
   const large = express.json({ limit: "10mb" });
   app.use("/api", (req, res, next) => (req.method === "PUT" && PLAN_PUT.test(req.path) ? large : small)(req, res, next));
@@ -103,6 +107,8 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
   const catalogue = createCatalogueService(dataSource);
   const analyses = createAnalysesService(dataSource, projects, catalogue, pool);
   const media = createMeasurementsModule({ dataSource, config, logger, projects, options: deps.measurements });
+  const money = createMoneyModule({ dataSource, config, logger, mailer, projects, catalogue, sessions, options: deps.money });
+  money.mountWebhook(beforeJson);
   const perAddress = deps.accountLimitPerAddress ?? 30;
 
   const api = express.Router();
@@ -116,9 +122,10 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
     }),
   );
   api.use(peopleRouter(people, sessions, addressLimiter(dataSource, "accept", 15 * 60_000, perAddress)));
-  api.use(projectsRouter(projects, sessions, [...planRoutes(plans), ...analysisRoutes(analyses), ...media.routes]));
+  api.use(projectsRouter(projects, sessions, [...planRoutes(plans), ...analysisRoutes(analyses), ...media.routes, ...money.projectRoutes]));
   api.use(catalogueRouter(catalogue, sessions));
   api.use(auditRouter(dataSource, sessions));
+  for (const r of money.routers) api.use(r);
   api.use((req, _res, next) => next(new HttpError(404, "not_found", `There is no ${req.method} ${req.baseUrl}${req.path} in this API.`)));
 
   // Each router registers its routes with their own prefix (`/auth`, `/people`, …) relative to /api/v1.
@@ -129,6 +136,7 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
     mailer.close();
     if (!deps.analysisPool) await pool.close();
     await media.close();
+    await money.close();
   };
   return { app, mailer, close };
 }

@@ -16,6 +16,7 @@ import { ProjectBrief } from "../intake/project-brief.entity.js";
 import { StoredFile } from "../files/stored-file.entity.js";
 import { Measurement } from "../measurements/measurement.entity.js";
 import { Photo } from "../measurements/photo.entity.js";
+import { moneyEntities } from "../money/entities.js";
 
 export {
   AnalysisCache, AuditEvent, FirmConstruction, Invitation, Membership, Organization, PasswordReset, Plan, PlanRevision, Project, ProjectClient, RateLimitBucket, Session, User,
@@ -24,5 +25,5 @@ export {
 /** Every entity, for the DataSource. */
 export const entities = [
   Organization, User, Membership, Project, ProjectClient, Plan, PlanRevision, AuditEvent, Session, Invitation, PasswordReset, RateLimitBucket,
-  AnalysisCache, FirmConstruction, ProjectBrief, StoredFile, Measurement, Photo,
+  AnalysisCache, FirmConstruction, ProjectBrief, StoredFile, Measurement, Photo, ...moneyEntities,
 ];

@@ -17,6 +17,10 @@ export class ProposalVersionRow {
   @Column({ type: "jsonb", name: "content" })
   content!: Record<string, unknown>;
 
+  /** The scenario's setup and upgrades as they were (the PDF draws the plan after them). */
+  @Column({ type: "jsonb", name: "scenario_snapshot" })
+  scenarioSnapshot!: { setup: Record<string, unknown>; items: { priceBookItemId: string; elementId: string }[] };
+
   /** The plan document the proposal was made on (the PDF draws it). */
   @Column({ type: "jsonb", name: "plan_document" })
   planDocument!: Record<string, unknown>;

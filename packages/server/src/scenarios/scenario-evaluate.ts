@@ -3,7 +3,7 @@
  * code as analyses), the upgrades turned into engine options, and the engine's planner giving
  * the received spectrum, dBA, NC, the target's shortfall, costs, area, labour, flags and cautions.
  */
-import { UpgradePlanner, type UpgradeOption } from "@hushmark/acoustics";
+import { aWeightedLevelDb, energyToDb, spectrum, UpgradePlanner, type UpgradeOption } from "@hushmark/acoustics";
 import { BANDS_HZ, type Catalogue } from "@hushmark/floorplan";
 import type { CautionDto, PriceBookItem, ScenarioEvaluation, ScenarioLine, ScenarioSetup, UpgradeFlagName } from "@hushmark/schemas";
 import { engineTarget, prepareNetwork, spaceName, type PreparedNetwork } from "../analyses/compute.js";
@@ -87,7 +87,7 @@ export function evaluateScenario(document: unknown, setup: ScenarioSetup, picks:
     evaluation: {
       bandsHz: [...BANDS_HZ],
       receiver: { id: setup.receiverId, name: spaceName(prepared.plan, setup.receiverId) },
-      source: { id: prepared.sourceId, name: spaceName(prepared.plan, prepared.sourceId) },
+      source: { id: prepared.sourceId, name: spaceName(prepared.plan, prepared.sourceId), dba: sourceDba(planner, prepared.sourceId) },
       before: { levelsDb: [...base.levelsDb], dba: base.dba, nc: base.nc },
       after: { levelsDb: [...r.levelsDb], dba: r.dba, nc: r.nc, gainDb: r.gainDb },
       target: t && r.shortfall ? { kind: t.kind, value: t.kind === "nc" ? t.nc : t.kind === "dba" ? t.dba : t.reductionDb, met: r.shortfall.met, shortfallDb: r.shortfall.shortfallDb } : null,
@@ -98,4 +98,14 @@ export function evaluateScenario(document: unknown, setup: ScenarioSetup, picks:
       notes: planner.prepared.flatMap((p) => p.costs.notes.map((n) => `${p.option.name ?? p.option.id}: ${n}`)),
     },
   };
+}
+
+/** The source space's A-weighted level in the solved network, dBA (0 when it is not a solved space). */
+function sourceDba(planner: UpgradePlanner, sourceId: string): number {
+  const i = planner.c.spaceIndex.get(sourceId);
+  if (i === undefined) return 0;
+  const B = planner.c.B;
+  const e = planner.solved.base.e.slice(i * B, i * B + B);
+  const dba = aWeightedLevelDb(spectrum(planner.c.bands, Array.from(e, (v) => energyToDb(Math.max(v, 1e-30)))));
+  return Number.isFinite(dba) && dba > 0 ? dba : 0;
 }

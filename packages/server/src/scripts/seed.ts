@@ -8,6 +8,7 @@ import { createDataSource } from "../data-source.js";
 import { Membership, Organization, Plan, PlanRevision, Project, ProjectClient, User } from "../entities/index.js";
 import { emptyPlanDocument } from "../plans/plan-documents.js";
 import { DEMO_FIRM, DEMO_PASSWORD, DEMO_PEOPLE, DEMO_PROJECTS } from "./demo-data.js";
+import { seedDemoPriceBook } from "../price-book/seed-price-book.js";
 
 const config = loadConfig();
 const dataSource = createDataSource(config.databaseUrl, { poolSize: 2 });
@@ -39,4 +40,5 @@ if (await dataSource.getRepository(User).exists({ where: { email: owner.email } 
   });
   console.log(`demo data: created ${DEMO_FIRM} with ${DEMO_PEOPLE.length} people and ${DEMO_PROJECTS.length} projects`);
 }
+await seedDemoPriceBook(dataSource, owner.email);
 await dataSource.destroy();

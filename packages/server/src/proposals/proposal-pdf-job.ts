@@ -1,0 +1,66 @@
+import type { Logger } from "pino";
+import type { DataSource } from "typeorm";
+import { proposalContentSchema, scenarioSetupSchema, type PriceBookItem } from "@hushmark/schemas";
+import type { CatalogueService } from "../catalogue/catalogue.service.js";
+import type { QueueSpec } from "../jobs/job-queue.js";
+import { PriceBookItem as PriceBookItemRow } from "../price-book/price-book-item.entity.js";
+import { itemDto } from "../price-book/price-book.service.js";
+import { plannerFor } from "../scenarios/scenario-evaluate.js";
+import { elementShares } from "./plan-drawing.js";
+import { renderProposalPdf } from "./proposal-pdf.js";
+import { ProposalVersionRow } from "./proposal-version.entity.js";
+import { ProposalRow } from "./proposal.entity.js";
+
+export const PROPOSAL_PDF_QUEUE = "proposal-pdf";
+
+export interface ProposalPdfJob {
+  proposalId: string;
+  version: number;
+}
+
+/** Renders one proposal version to PDF and keeps it with the version. */
+export async function renderProposalVersion(dataSource: DataSource, catalogues: CatalogueService, job: ProposalPdfJob): Promise<void> {
+  const versions = dataSource.getRepository(ProposalVersionRow);
+  const v = await versions.findOne({ where: { proposalId: job.proposalId, version: job.version } });
+  const proposal = await dataSource.getRepository(ProposalRow).findOne({ where: { id: job.proposalId } });
+  if (!v || !proposal) return;
+  const content = proposalContentSchema.parse(v.content);
+  const setup = scenarioSetupSchema.parse(v.scenarioSnapshot.setup);
+  const { catalogue } = await catalogues.catalogueFor(proposal.organizationId);
+  const ids = [...new Set(v.scenarioSnapshot.items.map((i) => i.priceBookItemId))];
+  const rows = ids.length ? await dataSource.getRepository(PriceBookItemRow).createQueryBuilder("i").where("i.id IN (:...ids)", { ids }).getMany() : [];
+  const book = new Map<string, PriceBookItem>(rows.map((r) => [r.id, itemDto(r)]));
+  const picks = v.scenarioSnapshot.items.flatMap((i, k) => {
+    const item = book.get(i.priceBookItemId);
+    return item ? [{ key: `u${k}`, item, elementId: i.elementId }] : [];
+  });
+  const built = plannerFor(v.planDocument, setup, picks, catalogue);
+  const prepared = built.ok ? built.value.prepared : null;
+  const markers = new Map<string, number>();
+  for (const l of content.evaluation.lines) if (!markers.has(l.elementId)) markers.set(l.elementId, markers.size + 1);
+  const before = prepared ? elementShares(prepared, setup.receiverId) : new Map<string, number>();
+  const after = prepared && built.ok ? elementShares(prepared, setup.receiverId, built.value.planner.prepared.map((p) => p.option)) : new Map<string, number>();
+  const pdf = await renderProposalPdf({ content, version: job.version, prepared, receiverId: setup.receiverId, sharesBefore: before, sharesAfter: after, markers });
+  await versions.update({ proposalId: job.proposalId, version: job.version }, { pdf, pdfStatus: "ready", pdfError: null });
+}
+
+export function proposalPdfQueue(dataSource: DataSource, catalogues: CatalogueService, logger: Logger): QueueSpec<ProposalPdfJob> {
+  return {
+    name: PROPOSAL_PDF_QUEUE,
+    retryLimit: 3,
+    retryDelaySeconds: 5,
+    expireInSeconds: 120,
+    handler: async (job) => {
+      try {
+        await renderProposalVersion(dataSource, catalogues, job.data);
+      } catch (e) {
+        logger.error({ err: e, job: job.data }, "proposal PDF failed");
+        if (job.retryCount >= job.retryLimit) {
+          await dataSource.getRepository(ProposalVersionRow).update({ proposalId: job.data.proposalId, version: job.data.version }, { pdfStatus: "failed", pdfError: (e as Error).message.slice(0, 500) });
+          return;
+        }
+        throw e;
+      }
+    },
+  };
+}
