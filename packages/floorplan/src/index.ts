@@ -102,3 +102,9 @@ export { planToGeoJson } from "./exchange/geojson-export.js";
 export type { LevelFeatureCollection, PlanFeature } from "./exchange/geojson-export.js";
 export { geoFrame, planToLonLat, lonLatToPlan, wgs84RadiiM } from "./exchange/geo-frame.js";
 export type { GeoFrame, SiteLocation } from "./exchange/geo-frame.js";
+// Exchange: element schedule and the published JSON Schema
+export { elementSchedule } from "./exchange/element-schedule.js";
+export type { ScheduleRow } from "./exchange/element-schedule.js";
+export { elementScheduleCsv, SCHEDULE_COLUMNS } from "./exchange/schedule-csv.js";
+export { csvField, csvText } from "./exchange/csv-text.js";
+export { planJsonSchema, planJsonSchemaText, PLAN_JSON_SCHEMA_PATH } from "./exchange/plan-json-schema.js";
