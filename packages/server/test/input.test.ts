@@ -57,6 +57,22 @@ describe("bad input", () => {
     ["upload photo", "post", (id) => `/api/v1/projects/${id}/photos`, {}, ["file"]],
     ["photo image", "get", (id) => `/api/v1/projects/${id}/photos/00000000-0000-4000-8000-000000000000/image?size=huge`, undefined, ["size"]],
     ["delete photo", "delete", (id) => `/api/v1/projects/${id}/photos/nope`, undefined, ["photoId"]],
+    ["add price book item", "post", () => "/api/v1/price-book/items", { code: "X", family: "loud", appliesTo: [], effect: { kind: "added-layer", deltaTlDb: -1 } }, ["code", "name", "family", "appliesTo", "effect.deltaTlDb"]],
+    ["edit price book item", "patch", () => "/api/v1/price-book/items/nope", { labourHours: -1 }, ["itemId"]],
+    ["remove price book item", "delete", () => "/api/v1/price-book/items/nope", undefined, ["itemId"]],
+    ["import price book", "post", () => "/api/v1/price-book/import", { csv: "", mode: "wipe" }, ["csv", "mode"]],
+    ["firm settings", "put", () => "/api/v1/firm/settings", { currency: "dollars", taxRatePercent: -1, depositPercent: 200, validityDays: 0 }, ["currency", "taxRatePercent", "depositPercent", "validityDays", "terms"]],
+    ["create scenario", "post", (id) => `/api/v1/projects/${id}/scenarios`, { name: "", setup: { planVersion: -1 }, items: [{ priceBookItemId: "x", elementId: "" }] }, ["name", "setup.planVersion", "setup.source", "setup.receiverId", "items.0.priceBookItemId", "items.0.elementId"]],
+    ["get scenario", "get", (id) => `/api/v1/projects/${id}/scenarios/nope`, undefined, ["scenarioId"]],
+    ["start option search", "post", (id) => `/api/v1/projects/${id}/option-searches`, { elementIds: [], limits: { budget: -5 } }, ["setup", "elementIds", "limits.budget"]],
+    ["option search", "get", (id) => `/api/v1/projects/${id}/option-searches/nope`, undefined, ["searchId"]],
+    ["create proposal", "post", (id) => `/api/v1/projects/${id}/proposals`, { scenarioId: "x", note: 5 }, ["scenarioId", "note"]],
+    ["get proposal", "get", () => "/api/v1/proposals/nope", undefined, ["proposalId"]],
+    ["change proposal", "patch", () => "/api/v1/proposals/nope", { validUntil: "soon" }, ["proposalId"]],
+    ["comment on proposal", "post", () => "/api/v1/proposals/nope/comments", { body: "" }, ["proposalId"]],
+    ["proposal PDF", "get", () => "/api/v1/proposals/nope/versions/0/pdf", undefined, ["proposalId", "version"]],
+    ["checklist item", "patch", () => "/api/v1/work-order-tasks/nope", { status: "finished" }, ["taskId"]],
+    ["verification", "post", (id) => `/api/v1/projects/${id}/verifications`, { proposalId: "x", beforeLevelsDb: [1], afterLevelsDb: "x" }, ["proposalId", "beforeLevelsDb", "afterLevelsDb"]],
   ];
 
   it.each(cases)("%s answers 400 with the field paths", async (_name, method, path, body, paths) => {
