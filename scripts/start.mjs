@@ -34,14 +34,15 @@ try {
   const smtpPort = Number(process.env.HUSHMARK_SMTP_PORT ?? 55025);
   const mailApiPort = Number(process.env.HUSHMARK_MAIL_API_PORT ?? 55026);
   const s3Port = Number(process.env.HUSHMARK_S3_PORT ?? 55027);
+  const paymentsPort = Number(process.env.HUSHMARK_PAYMENTS_PORT ?? 55028);
   const dir = dataFolder(root);
   cluster = await bringUpDatabase({ dir, port: Number(process.env.HUSHMARK_PG_PORT ?? 55432), database: "hushmark" });
   buildAll(root);
   step("migrating and seeding…");
   migrate(root, cluster.databaseUrl);
   run("node", ["packages/server/dist/scripts/seed.js"], { cwd: root, env: { ...process.env, DATABASE_URL: cluster.databaseUrl } });
-  children.push(await startFakes(root, { smtpPort, mailApiPort, s3Port, s3Dir: process.env.HUSHMARK_S3_DIR ?? join(dir, "objects") }));
   const publicUrl = process.env.HUSHMARK_PUBLIC_URL ?? `http://${host}:${port}`;
+  children.push(await startFakes(root, { smtpPort, mailApiPort, s3Port, s3Dir: process.env.HUSHMARK_S3_DIR ?? join(dir, "objects"), paymentsPort, webhookUrl: `${publicUrl}/api/v1/payments/webhook` }));
   const server = startService("server", "node", ["packages/server/dist/index.js"], {
     cwd: root,
     env: {
@@ -56,6 +57,7 @@ try {
       HUSHMARK_MAIL_API_URL: `http://127.0.0.1:${mailApiPort}`,
       HUSHMARK_S3_ENDPOINT: process.env.HUSHMARK_S3_ENDPOINT ?? `http://127.0.0.1:${s3Port}`,
       HUSHMARK_JWT_SECRET: process.env.HUSHMARK_JWT_SECRET ?? persistentSecret(dir, "jwt.secret"),
+      HUSHMARK_STRIPE_PORT: process.env.HUSHMARK_STRIPE_PORT ?? String(paymentsPort),
     },
   });
   children.push(server);

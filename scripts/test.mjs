@@ -39,7 +39,7 @@ function ensureChromium() {
 /** `npm start` in the background on its own data folder and ports: health, a demo sign-in, Ctrl-C. */
 async function checkStartCommand(dir) {
   const name = "npm start comes up, serves the demo sign-in and stops on Ctrl-C";
-  const [port, pgPort, smtpPort, mailApiPort, s3Port] = [await freePort(58080), await freePort(56432), await freePort(56025), await freePort(56125), await freePort(56027)];
+  const [port, pgPort, smtpPort, mailApiPort, s3Port, paymentsPort] = [await freePort(58080), await freePort(56432), await freePort(56025), await freePort(56125), await freePort(56027), await freePort(56028)];
   const env = {
     ...process.env,
     HUSHMARK_DATA_DIR: join(dir, "start-check"),
@@ -48,6 +48,7 @@ async function checkStartCommand(dir) {
     HUSHMARK_SMTP_PORT: String(smtpPort),
     HUSHMARK_MAIL_API_PORT: String(mailApiPort),
     HUSHMARK_S3_PORT: String(s3Port),
+    HUSHMARK_PAYMENTS_PORT: String(paymentsPort),
     NO_COLOR: "1",
   };
   delete env.DATABASE_URL;

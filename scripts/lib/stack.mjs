@@ -57,15 +57,16 @@ export function migrate(root, databaseUrl) {
   run("node", ["packages/server/dist/scripts/migrate.js"], { cwd: root, env: { ...process.env, DATABASE_URL: databaseUrl } });
 }
 
-/** Starts the local fakes (mail, object storage) and waits until they answer. */
-export async function startFakes(root, { smtpPort, mailApiPort, s3Port, s3Dir }) {
+/** Starts the local fakes (mail, object storage, payments) and waits until they answer. */
+export async function startFakes(root, { smtpPort, mailApiPort, s3Port, s3Dir, paymentsPort = 55028, webhookUrl }) {
   if (s3Dir) mkdirSync(s3Dir, { recursive: true });
   const child = startService("fakes", "node", ["packages/fakes/dist/main.js"], {
     cwd: root,
-    env: { ...process.env, HUSHMARK_SMTP_PORT: String(smtpPort), HUSHMARK_MAIL_API_PORT: String(mailApiPort), HUSHMARK_S3_PORT: String(s3Port), ...(s3Dir ? { HUSHMARK_S3_DIR: s3Dir } : {}) },
+    env: { ...process.env, HUSHMARK_SMTP_PORT: String(smtpPort), HUSHMARK_MAIL_API_PORT: String(mailApiPort), HUSHMARK_S3_PORT: String(s3Port), ...(s3Dir ? { HUSHMARK_S3_DIR: s3Dir } : {}), HUSHMARK_PAYMENTS_PORT: String(paymentsPort), ...(webhookUrl ? { HUSHMARK_PAYMENTS_WEBHOOK_URL: webhookUrl } : {}) },
   });
   await waitForHttp(`http://127.0.0.1:${mailApiPort}/health`, 15_000, child);
   await waitForHttp(`http://127.0.0.1:${s3Port}/`, 15_000, child);
+  await waitForHttp(`http://127.0.0.1:${paymentsPort}/health`, 15_000, child);
   return child;
 }
 

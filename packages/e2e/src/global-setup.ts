@@ -6,6 +6,7 @@ declare module "vitest" {
   export interface ProvidedContext {
     baseUrl: string;
     mailApiUrl: string;
+    paymentsUrl: string;
   }
 }
 
@@ -20,7 +21,7 @@ export default async function setup(project: TestProject) {
   await client.connect();
   await client.query("DROP SCHEMA IF EXISTS public CASCADE; CREATE SCHEMA public;");
   await client.end();
-  const [port, smtpPort, mailApiPort, s3Port] = [await freePort(), await freePort(), await freePort(), await freePort()];
+  const [port, smtpPort, mailApiPort, s3Port, paymentsPort] = [await freePort(), await freePort(), await freePort(), await freePort(), await freePort()];
   const env = {
     ...process.env,
     NODE_ENV: "development" as const,
@@ -33,16 +34,21 @@ export default async function setup(project: TestProject) {
     HUSHMARK_S3_PORT: String(s3Port),
     HUSHMARK_S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
     HUSHMARK_LOG_LEVEL: "warn",
+    HUSHMARK_PAYMENTS_PORT: String(paymentsPort),
+    HUSHMARK_PAYMENTS_WEBHOOK_URL: `http://127.0.0.1:${port}/api/v1/payments/webhook`,
+    HUSHMARK_STRIPE_PORT: String(paymentsPort),
   };
   await runNode(["packages/server/dist/scripts/migrate.js"], env);
   await runNode(["packages/server/dist/scripts/seed.js"], env);
   const fakes = startNode(["packages/fakes/dist/main.js"], env);
   await waitFor(`http://127.0.0.1:${mailApiPort}/health`, 15_000, fakes.child, fakes.output);
   await waitFor(`http://127.0.0.1:${s3Port}/`, 15_000, fakes.child, fakes.output);
+  await waitFor(`http://127.0.0.1:${paymentsPort}/health`, 15_000, fakes.child, fakes.output);
   const server = startNode(["packages/server/dist/index.js"], env);
   await waitFor(`http://127.0.0.1:${port}/api/v1/health`, 30_000, server.child, server.output);
   project.provide("baseUrl", `http://127.0.0.1:${port}`);
   project.provide("mailApiUrl", `http://127.0.0.1:${mailApiPort}`);
+  project.provide("paymentsUrl", `http://127.0.0.1:${paymentsPort}`);
   return async () => {
     for (const proc of [server, fakes]) {
       proc.child.kill("SIGTERM");
