@@ -93,8 +93,17 @@ export function LiveAnalyzer({ projectId, onSaved, onClose }: { projectId: strin
           <div className="w-48"><Input label="Calibration offset (dB)" type="number" step="0.5" value={offset} disabled={running} onChange={(e) => setOffset(e.target.value)} /></div>
           {running ? <Button variant="secondary" onClick={stop}>Stop</Button> : <Button onClick={() => void start()}>{snap ? "Start again" : "Start listening"}</Button>}
           <div className="ml-auto text-right" aria-live="off">
-            <div className="text-3xl font-semibold tabular-nums" data-testid="live-dba">{snap?.lafDb?.toFixed(1) ?? "—"} <span className="text-base font-normal text-muted">dBA now</span></div>
-            <div className="text-sm text-muted tabular-nums">LAeq {snap?.laeqDb?.toFixed(1) ?? "—"} dBA over {snap ? Math.round(snap.durationS) : 0} s</div>
+            {running || !snap ? (
+              <>
+                <div className="text-3xl font-semibold tabular-nums" data-testid="live-dba">{snap?.lafDb?.toFixed(1) ?? "—"} <span className="text-base font-normal text-muted">dBA now</span></div>
+                <div className="text-sm text-muted tabular-nums">LAeq {snap?.laeqDb?.toFixed(1) ?? "—"} dBA over {snap ? Math.round(snap.durationS) : 0} s</div>
+              </>
+            ) : (
+              <>
+                <div className="text-3xl font-semibold tabular-nums" data-testid="live-dba">{snap.laeqDb?.toFixed(1) ?? "—"} <span className="text-base font-normal text-muted">dBA LAeq</span></div>
+                <div className="text-sm text-muted tabular-nums">over the {Math.round(snap.durationS)} s captured</div>
+              </>
+            )}
           </div>
         </div>
         {error ? <p className="text-sm font-medium text-danger" role="alert">{error}</p> : null}

@@ -31,7 +31,7 @@ export function SpectrumChart({ series, showNc = true, title }: { series: Spectr
   const clip = (db: number) => Math.max(lo, Math.min(hi, db));
 
   return (
-    <figure className="flex flex-col gap-2">
+    <figure className="flex max-w-[880px] flex-col gap-2">
       <svg viewBox={`0 0 ${W} ${H}`} className="w-full" role="img" aria-label={title} data-testid="spectrum-chart">
         <rect x={M.left} y={M.top} width={W - M.left - M.right} height={H - M.top - M.bottom} fill="#ffffff" stroke="#d9d4c7" />
         {yTicks.map((t) => (
