@@ -112,15 +112,25 @@ export function dxfConverter(options: DxfImportOptions, units: Extract<DxfUnits,
     }
     // A closed outline around other outlines is the building's or a flat's edge, not a room; a copy is a duplicate.
     outlines.sort((a, b) => b.areaM2 - a.areaM2);
+    const bounds = outlines.map((a) => boundsM(a.points));
+    // Only outlines whose left edge falls within another's x-extent can lie inside it: sweep by left edge.
+    const byMinX = outlines.map((_, i) => i).sort((p, q) => bounds[p]!.minX - bounds[q]!.minX);
     const kept: typeof outlines = [];
     outlines.forEach((a, i) => {
-      const ba = boundsM(a.points);
+      const ba = bounds[i]!;
+      let lo = 0, hi = byMinX.length;
+      while (lo < hi) {
+        const mid = (lo + hi) >> 1;
+        if (bounds[byMinX[mid]!]!.minX < ba.minX - o.snapM) lo = mid + 1;
+        else hi = mid;
+      }
       let encloses = false, duplicate = false;
-      for (let k = 0; k < outlines.length && !encloses; k++) {
+      for (let s = lo; s < byMinX.length && !encloses && bounds[byMinX[s]!]!.minX <= ba.maxX + o.snapM; s++) {
+        const k = byMinX[s]!;
         if (k === i) continue;
         const b = outlines[k]!;
-        const bb = boundsM(b.points);
-        if (bb.minX < ba.minX - o.snapM || bb.maxX > ba.maxX + o.snapM || bb.minY < ba.minY - o.snapM || bb.maxY > ba.maxY + o.snapM) continue;
+        const bb = bounds[k]!;
+        if (bb.maxX > ba.maxX + o.snapM || bb.minY < ba.minY - o.snapM || bb.maxY > ba.maxY + o.snapM) continue;
         const overlap = polygonOverlapM2(a.points, b.points);
         if (overlap < 0.95 * b.areaM2) continue;
         if (b.areaM2 >= 0.99 * a.areaM2) duplicate ||= k < i;
@@ -133,13 +143,32 @@ export function dxfConverter(options: DxfImportOptions, units: Extract<DxfUnits,
     });
     const ids = new Set<string>();
     const usedLabels = new Set<number>();
+    // Labels sorted by x, so each room looks only at those within its x-extent.
+    const labelOrder = labels.map((_, k) => k).sort((p, q) => labels[p]!.at.x - labels[q]!.at.x);
+    const labelInside = (outline: readonly Point[]): number => {
+      const b = boundsM(outline);
+      let lo = 0, hi = labelOrder.length;
+      while (lo < hi) {
+        const mid = (lo + hi) >> 1;
+        if (labels[labelOrder[mid]!]!.at.x < b.minX) lo = mid + 1;
+        else hi = mid;
+      }
+      let best = -1;
+      for (let s = lo; s < labelOrder.length && labels[labelOrder[s]!]!.at.x <= b.maxX; s++) {
+        const k = labelOrder[s]!;
+        const at = labels[k]!.at;
+        // The first label in file order wins, whatever the sort put first.
+        if (!usedLabels.has(k) && (best < 0 || k < best) && at.y >= b.minY && at.y <= b.maxY && pointInPolygon(at, outline)) best = k;
+      }
+      return best;
+    };
     const rooms: Room[] = kept
       .sort((a, b) => ((a.path.handles[0] ?? "") < (b.path.handles[0] ?? "") ? -1 : 1))
       .map((a, n) => {
         let id = `${o.idPrefix}-room-${safeId(a.path.handles[0] ?? String(n + 1))}`;
         for (let k = 2; ids.has(id); k++) id = `${o.idPrefix}-room-${safeId(a.path.handles[0] ?? "")}-${k}`;
         ids.add(id);
-        const li = labels.findIndex((l, k) => !usedLabels.has(k) && pointInPolygon(l.at, a.points));
+        const li = labelInside(a.points);
         if (li >= 0) usedLabels.add(li);
         return {
           type: "room", id, levelId: o.levelId, name: li >= 0 ? labels[li]!.text : `Room ${n + 1}`, use: o.roomUse ?? "other",
