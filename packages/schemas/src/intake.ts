@@ -1,4 +1,5 @@
 import { z } from "zod";
+import type { AnalysisTarget } from "./analyses.js";
 
 /** Kinds of noise a brief can name. */
 export const noiseKindSchema = z.enum(["speech", "music_bass", "television", "traffic", "machinery_hum", "impact"], "Pick the kind of noise.");
@@ -69,3 +70,22 @@ export const briefResponseSchema = z.object({
   updatedBy: z.string().nullable(),
 });
 export type BriefResponse = z.infer<typeof briefResponseSchema>;
+
+/** "Noticeably quieter" is aimed at this reduction: clearly noticeable to most people (common practice). */
+export const NOTICEABLE_REDUCTION_DB = 5;
+
+/** The target an analysis of this project aims at, from its brief (undefined when none is agreed). */
+export function analysisTargetOfBrief(brief: Pick<Brief, "target">): AnalysisTarget | undefined {
+  const t = brief.target;
+  if (!t) return undefined;
+  switch (t.kind) {
+    case "level":
+      return { kind: "dba", dba: t.levelDba };
+    case "nc":
+      return { kind: "nc", nc: t.nc };
+    case "reduction":
+      return { kind: "reduction", reductionDb: t.reductionDb };
+    case "noticeable":
+      return { kind: "reduction", reductionDb: NOTICEABLE_REDUCTION_DB };
+  }
+}
