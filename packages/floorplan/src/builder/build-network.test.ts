@@ -165,3 +165,18 @@ describe("flanking pruning", () => {
     }
   });
 });
+
+describe("crawlspaces", () => {
+  it("link the rooms above through their own floor and covering", () => {
+    const r = built([
+      groundLevel, room("A", 0, 0, 4, 5, "L0", { floor: { constructionId: "floor-wood-joist-no-ceiling", coveringId: "covering-vinyl" } }),
+      { type: "void", id: "C", name: "Crawlspace", kind: "crawlspace", levelId: "L0", outline: rect("C", 0, 0, 4, 5), depthM: 0.8 },
+    ]);
+    const link = r.network.links!.find((l) => l.type === "floor");
+    if (!link || link.type !== "floor") throw new Error("no floor link");
+    expect(link).toMatchObject({ id: "floor:A^C", between: ["A", "C"], ref: "A^C" });
+    expect(link.tl_db).toEqual(constructionCatalogue.constructions["floor-wood-joist-no-ceiling"]!.tlDb);
+    expect(link.impact?.delta_l_db).toEqual(constructionCatalogue.coverings["covering-vinyl"]!.deltaLDb);
+    expect(r.network.spaces.find((s) => s.id === "C")).toMatchObject({ kind: "crawlspace" });
+  });
+});

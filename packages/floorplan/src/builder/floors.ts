@@ -23,13 +23,17 @@ function floorLink(ctx: BuildContext, upper: Room, lowerId: string, areaM2: numb
 }
 
 function ceilingLink(ctx: BuildContext, v: Void, room: Room, areaM2: number): { link: LinkInput; trace: LinkTrace } {
+  if (v.kind === "crawlspace") {
+    // Under the room: its own floor (and covering) separates it from the crawlspace.
+    const r = floorLink(ctx, room, v.id, areaM2, `${room.id}^${v.id}`, polygonCentroid(room.outline), room.levelId);
+    return r;
+  }
   const c = constructionOf(ctx, room.ceiling?.constructionId ?? ctx.plan.defaults.ceilingConstructionId);
-  const above = v.kind !== "crawlspace";
-  const ref = above ? `${v.id}^${room.id}` : `${room.id}^${v.id}`;
+  const ref = `${v.id}^${room.id}`;
   const linkId = `ceiling:${ref}`;
-  const between: [string, string] = above ? [v.id, room.id] : [room.id, v.id];
+  const between: [string, string] = [v.id, room.id];
   const link: LinkInput = {
-    id: linkId, type: "floor", between, ref, name: above ? `Ceiling of ${room.name} to ${v.name}` : `Floor of ${room.name} over ${v.name}`,
+    id: linkId, type: "floor", between, ref, name: `Ceiling of ${room.name} to ${v.name}`,
     area_m2: areaM2, tl_db: c.tlDb, ...(c.source.kind === "estimate" ? { estimate: true } : {}),
   };
   return { link, trace: { linkId, kind: "ceiling", refs: [ref, room.id, v.id], levelId: room.levelId, polyline: [polygonCentroid(room.outline)], spaces: between } };
