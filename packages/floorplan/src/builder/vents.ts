@@ -19,7 +19,8 @@ export function buildVentLinks(ctx: BuildContext): { links: LinkInput[]; traces:
       name: duct.name ?? `Duct from ${spaceName(ctx, a.spaceId)} to ${spaceName(ctx, b.spaceId)}`,
       open_area_m2: crossSectionM2, attenuation_db: totalAttenuationDb(parts), attenuation_parts: parts,
     });
-    const levelA = ctx.rooms.get(a.spaceId)?.levelId ?? "";
+    const host = ctx.plan.elements[a.spaceId];
+    const levelA = host && "levelId" in host ? host.levelId : "";
     traces.push({ linkId, kind: "vent", refs: [a.id, duct.id, b.id], levelId: levelA, polyline: [a.position, b.position], spaces: [a.spaceId, b.spaceId] });
   }
   return { links, traces };
