@@ -89,6 +89,15 @@ describe("Brief and Measure", () => {
     const rows = page.getByTestId("events-table").locator("tbody tr");
     await expect(rows.count()).resolves.toBe(1);
     await expect(rows.first().textContent()).resolves.toMatch(/0:0[3-5].*1k Hz/);
+    // Playing the event asks the server for that part of the file only.
+    await rows.first().getByRole("button", { name: "Play" }).click();
+    const src = await page.locator("audio").getAttribute("src");
+    expect(src).toMatch(/\/audio\?startS=\d+&durationS=\d+/);
+    const clip = await page.request.get(`${baseUrl}${src}`);
+    expect(clip.headers()["content-type"]).toBe("audio/wav");
+    const { startS, durationS } = Object.fromEntries(new URL(`${baseUrl}${src}`).searchParams) as { startS: string; durationS: string };
+    expect((await clip.body()).length).toBe(44 + Math.ceil(Number(durationS) * 16_000) * 2);
+    expect(Number(startS)).toBeGreaterThanOrEqual(2);
     // The tone at −20 dB re full scale with the default 100 dB offset: 80 dB in the 1 kHz band while loud.
     const res = await page.request.get(`${baseUrl}/api/v1/projects/${projectId}/measurements`);
     const list = (await res.json()) as { measurements: { source: string; lmaxDb: number[]; status: string }[] };
@@ -143,7 +152,8 @@ describe("Brief and Measure", () => {
       await page.waitForTimeout(2000);
       await page.getByRole("button", { name: "Stop" }).click();
       await page.getByRole("button", { name: "Save as a measurement" }).click();
-      await page.getByTestId("measurement-list").waitFor();
+      await page.getByTestId("measurement-list").or(page.getByRole("alert")).first().waitFor();
+      expect(await page.getByRole("alert").count(), (await page.getByRole("alert").allTextContents()).join(" ")).toBe(0);
       const res = await page.request.get(`${baseUrl}/api/v1/projects/${projectId}/measurements`);
       const [m] = ((await res.json()) as { measurements: { source: string; leqDb: (number | null)[] }[] }).measurements;
       expect(m!.source).toBe("live");

@@ -8,6 +8,9 @@ import { usePlanPlaces } from "../api/plan-places";
 import { emptyMeta, isoOf, MeasurementMetaFields, pointOf, type MetaValues } from "./measurement-meta-fields";
 import { SpectrumChart } from "./spectrum-chart";
 
+// A band the microphone did not hear at all (digital silence) has no level worth keeping.
+const inRange = (v: number | null) => (v === null || v < -50 ? null : v);
+
 interface Capture {
   context: AudioContext;
   stream: MediaStream;
@@ -72,7 +75,7 @@ export function LiveAnalyzer({ projectId, onSaved, onClose }: { projectId: strin
     try {
       const m = await createMeasurement(projectId, {
         label: meta.label, kind: meta.kind, takenAt: isoOf(meta.takenAt), roomId: meta.roomId || null, point: meta.roomId ? pointOf(places, meta.roomId) : null, device: meta.device || "Browser microphone (uncalibrated)", calibrationDb: calibration,
-        source: "live", leqDb: snap.leqDb, lmaxDb: snap.lmaxDb,
+        source: "live", leqDb: snap.leqDb.map(inRange), lmaxDb: snap.lmaxDb.map(inRange),
       });
       onSaved(m.id);
     } catch (e) {

@@ -23,8 +23,9 @@ const x = (hz: number) => M.left + ((Math.log10(hz) - Math.log10(F_MIN)) / (Math
  */
 export function SpectrumChart({ series, showNc = true, title }: { series: SpectrumSeries[]; showNc?: boolean; title: string }) {
   const values = series.flatMap((s) => [...s.leqDb, ...(s.lmaxDb ?? [])]).filter((v): v is number => v !== null && v !== undefined);
-  const lo = values.length ? Math.floor((Math.min(...values) - 5) / 10) * 10 : 0;
   const hi = values.length ? Math.ceil((Math.max(...values) + 5) / 10) * 10 : 80;
+  // At most 100 dB of range, so a band of near-silence does not flatten everything else.
+  const lo = values.length ? Math.max(hi - 100, Math.floor((Math.min(...values) - 5) / 10) * 10) : 0;
   const y = (db: number) => M.top + (1 - (db - lo) / (hi - lo)) * (H - M.top - M.bottom);
   const yTicks = Array.from({ length: (hi - lo) / 10 + 1 }, (_, i) => lo + i * 10);
   const single = series.length === 1;
