@@ -25,6 +25,7 @@ export type { Hit } from "./geometry/hit-test.js";
 export { elementBounds, planBounds, boundsOfMany, unionBounds } from "./geometry/bounds.js";
 export type { Bounds } from "./geometry/bounds.js";
 export { wallHosts, hostOf, levelOf } from "./geometry/hosts.js";
+export { wallPiecesOf, wallPieceById } from "./geometry/pieces.js";
 export type { WallHost } from "./geometry/hosts.js";
 
 export { parseLength, parseLengthPair, formatLength, isLengthKey } from "./units/length.js";

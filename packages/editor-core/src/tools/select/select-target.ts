@@ -1,4 +1,5 @@
-import { planWallPieces, type Plan, type Point } from "@hushmark/floorplan";
+import type { Plan, Point } from "@hushmark/floorplan";
+import { wallPieceById, wallPiecesOf } from "../../geometry/pieces.js";
 import type { Hit } from "../../geometry/hit-test.js";
 import { closestOnSegment } from "../../geometry/vec.js";
 import { hostOf } from "../../geometry/hosts.js";
@@ -12,7 +13,7 @@ export function selectionFor(plan: Plan, hit: Hit, p: Point): string {
   const host = hostOf(plan, hit.edgeRef);
   if (!host) return hit.elementId;
   const alongM = closestOnSegment(p, host.start, host.end).t * host.lengthM;
-  const piece = planWallPieces(plan).find((pc) => pc.sides.some((s) => s.edgeRef === hit.edgeRef && s.fromM - 1e-6 <= alongM && alongM <= s.toM + 1e-6));
+  const piece = wallPiecesOf(plan).find((pc) => pc.sides.some((s) => s.edgeRef === hit.edgeRef && s.fromM - 1e-6 <= alongM && alongM <= s.toM + 1e-6));
   return piece?.id ?? hit.elementId;
 }
 
@@ -21,7 +22,7 @@ export function movableIds(plan: Plan, selection: readonly string[]): string[] {
   const out = new Set<string>();
   for (const id of selection) {
     if (id in plan.elements) { out.add(id); continue; }
-    const piece = planWallPieces(plan).find((pc) => pc.id === id);
+    const piece = wallPieceById(plan, id);
     for (const s of piece?.sides ?? []) out.add(s.roomId);
   }
   return [...out];

@@ -1,5 +1,5 @@
 import { memo } from "react";
-import { Circle, Group, Label, Tag, Text } from "react-konva";
+import { Circle, Group, Label, Shape, Tag, Text } from "react-konva";
 import { elementsOfType, formatArea, polygonAreaM2, polygonCentroid, type Plan } from "@hushmark/floorplan";
 import { brand, ink, muted, panel } from "./colours";
 
@@ -15,16 +15,29 @@ export const LabelsGroup = memo(function LabelsGroup({ plan, levelId, scale, uni
   const showArea = scale >= 25;
   return (
     <Group listening={false}>
-      {rooms.map((r) => {
-        const c = polygonCentroid(r.outline);
-        const area = formatArea(polygonAreaM2(r.outline), unit);
-        return (
-          <Group key={r.id} x={c.x * scale} y={-c.y * scale}>
-            <Text text={r.name || "Unnamed room"} fontFamily="Work Sans" fontSize={13} fontStyle="600" fill={ink} width={200} offsetX={100} offsetY={showArea ? 14 : 7} wrap="none" ellipsis align="center" />
-            {showArea ? <Text text={area} fontFamily="Work Sans" fontSize={12} fill={muted} width={200} offsetX={100} offsetY={-3} align="center" /> : null}
-          </Group>
-        );
-      })}
+      {/* Room names are painted by one shape: a plan of hundreds of rooms would otherwise create and measure a text node each. */}
+      <Shape
+        listening={false}
+        perfectDrawEnabled={false}
+        sceneFunc={(context) => {
+          const ctx = context._context;
+          ctx.textAlign = "center";
+          ctx.textBaseline = "middle";
+          for (const r of rooms) {
+            const c = polygonCentroid(r.outline);
+            const x = c.x * scale, y = -c.y * scale;
+            const name = r.name || "Unnamed room";
+            ctx.font = "600 13px 'Work Sans', sans-serif";
+            ctx.fillStyle = ink;
+            ctx.fillText(name.length > 30 ? `${name.slice(0, 29)}…` : name, x, showArea ? y - 7 : y);
+            if (showArea) {
+              ctx.font = "12px 'Work Sans', sans-serif";
+              ctx.fillStyle = muted;
+              ctx.fillText(formatArea(polygonAreaM2(r.outline), unit), x, y + 9);
+            }
+          }
+        }}
+      />
       {pins.map((p) => (
         <Group key={p.id} x={p.position.x * scale} y={-p.position.y * scale}>
           <Circle radius={7} stroke={brand} strokeWidth={2.5} fill={panel} />

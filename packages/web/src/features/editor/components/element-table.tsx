@@ -1,9 +1,11 @@
-import { memo } from "react";
+import { memo, useState } from "react";
 import type { EditorStore } from "@hushmark/editor-core";
-import { deleteElements, levelOf, renameElement } from "@hushmark/editor-core";
-import { formatArea, planWallPieces, polygonAreaM2, type Plan } from "@hushmark/floorplan";
+import { deleteElements, levelOf, renameElement, wallPiecesOf } from "@hushmark/editor-core";
+import { formatArea, polygonAreaM2, type Plan } from "@hushmark/floorplan";
 import { elementTitle, typeName } from "../panels/element-title";
 import { constructionName } from "../panels/construction-ratings";
+
+const PAGE = 200;
 
 function summary(plan: Plan, id: string): string {
   const el = plan.elements[id];
@@ -28,8 +30,11 @@ function summary(plan: Plan, id: string): string {
  */
 export const ElementTable = memo(function ElementTable({ plan, levelId, selection, store }: { plan: Plan; levelId: string; selection: readonly string[]; store: EditorStore }) {
   const ids = Object.values(plan.elements).filter((e) => e.type !== "level" && e.type !== "neighbour" && levelOf(plan, e.id) === levelId).map((e) => e.id);
-  const pieces = planWallPieces(plan).filter((p) => p.levelId === levelId).map((p) => p.id);
-  const rows = [...ids, ...pieces];
+  const pieces = wallPiecesOf(plan).filter((p) => p.levelId === levelId).map((p) => p.id);
+  const all = [...ids, ...pieces];
+  // A large plan lists in pages so opening the list never stalls; the selection always shows.
+  const [limit, setLimit] = useState(PAGE);
+  const rows = all.length > limit ? [...new Set([...selection.filter((id) => all.includes(id)), ...all.slice(0, limit)])] : all;
   return (
     <table className="w-full text-left text-[14px]" aria-label="Elements on this level">
       <thead className="sticky top-0 bg-panel text-[12px] uppercase tracking-wide text-muted">
@@ -65,6 +70,9 @@ export const ElementTable = memo(function ElementTable({ plan, levelId, selectio
           );
         })}
         {rows.length === 0 ? <tr><td colSpan={4} className="px-2 py-3 text-muted">Nothing drawn on this level yet.</td></tr> : null}
+        {all.length > rows.length ? (
+          <tr><td colSpan={4} className="px-2 py-2"><button type="button" className="min-h-11 rounded px-3 font-medium text-brand-strong hover:bg-brand-soft" onClick={() => setLimit((l) => l + PAGE * 4)}>Show more ({all.length - rows.length} not listed)</button></td></tr>
+        ) : null}
       </tbody>
     </table>
   );

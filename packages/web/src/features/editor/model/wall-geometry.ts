@@ -1,5 +1,5 @@
-import { elementsOfType, planWallPieces, openingPlacement, type Opening, type Plan, type Point } from "@hushmark/floorplan";
-import { hostOf } from "@hushmark/editor-core";
+import { elementsOfType, openingPlacement, type Opening, type Plan, type Point } from "@hushmark/floorplan";
+import { hostOf, wallPiecesOf } from "@hushmark/editor-core";
 
 /** A wall band to draw: a centreline with a real thickness (m). */
 export interface WallBand {
@@ -20,7 +20,7 @@ export function wallBands(plan: Plan): WallBand[] {
   const hit = bandsCache.get(plan.elements);
   if (hit && bandsCache.get(plan.wallSettings) === hit) return hit;
   const out: WallBand[] = [];
-  for (const piece of planWallPieces(plan)) {
+  for (const piece of wallPiecesOf(plan)) {
     const setting = plan.wallSettings[piece.id];
     out.push({ id: piece.id, levelId: piece.levelId, start: piece.start, end: piece.end, thicknessM: setting?.thicknessM ?? plan.defaults.wallThicknessM, kind: piece.kind, roomIds: piece.sides.map((side) => side.roomId) });
   }
@@ -58,7 +58,7 @@ export function openingSpan(plan: Plan, opening: Opening): OpeningSpan | null {
 
 /** Whether the plan model can place an opening (off its wall, wider than it). */
 export function openingFits(plan: Plan, opening: Opening): boolean {
-  return openingPlacement(plan, planWallPieces(plan), opening, plan.defaults.wallToleranceM).ok;
+  return openingPlacement(plan, wallPiecesOf(plan), opening, plan.defaults.wallToleranceM).ok;
 }
 
 const thicknessCache = new WeakMap<object, Map<string, number>>();

@@ -1,5 +1,5 @@
 import type { Plan } from "@hushmark/floorplan";
-import { planWallPieces } from "@hushmark/floorplan";
+import { wallPieceById } from "@hushmark/editor-core";
 
 const typeNames: Record<string, string> = {
   room: "Room", wall: "Wall", door: "Door", window: "Window", penetration: "Gap", vent: "Vent", duct: "Duct link",
@@ -11,7 +11,7 @@ export const typeName = (type: string) => typeNames[type] ?? type;
 export function elementTitle(plan: Plan, id: string): string {
   const el = plan.elements[id];
   if (!el) {
-    const piece = planWallPieces(plan).find((p) => p.id === id);
+    const piece = wallPieceById(plan, id);
     if (!piece) return id;
     const names = piece.sides.map((s) => { const r = plan.elements[s.roomId]; return r?.type === "room" ? r.name : s.roomId; });
     return piece.kind === "shared" ? `Wall between ${names.join(" and ")}` : `Outer wall of ${names[0]}`;

@@ -1,6 +1,7 @@
 import type { EditorStore } from "@hushmark/editor-core";
 import { setProperties, setWallSetting } from "@hushmark/editor-core";
-import { elementsOfType, planWallPieces, type FreeWall, type Plan, type WallPiece } from "@hushmark/floorplan";
+import { elementsOfType, type FreeWall, type Plan, type WallPiece } from "@hushmark/floorplan";
+import { wallPieceById } from "@hushmark/editor-core";
 import { formatLength } from "@hushmark/editor-core";
 import { ConstructionPicker } from "./construction-picker";
 import { CommitInput, SelectField, readNumber } from "./commit-input";
@@ -12,7 +13,7 @@ export function pieceTitle(plan: Plan, piece: WallPiece): string {
 }
 
 export function findPiece(plan: Plan, id: string): WallPiece | undefined {
-  return planWallPieces(plan).find((p) => p.id === id);
+  return wallPieceById(plan, id);
 }
 
 /** A wall piece derived from room outlines: its construction, thickness, height and what lies beyond it. */

@@ -1,7 +1,7 @@
 import { useEffect, useMemo, useRef, useState } from "react";
 import { useQueryClient } from "@tanstack/react-query";
-import { EditorStore, InspectTool, boundsOfMany, planBounds, setLeaks, type ToolEnv } from "@hushmark/editor-core";
-import { levelsByElevation, planWallPieces, type Leaks } from "@hushmark/floorplan";
+import { EditorStore, InspectTool, boundsOfMany, planBounds, setLeaks, wallPieceById, type ToolEnv } from "@hushmark/editor-core";
+import { levelsByElevation, type Leaks } from "@hushmark/floorplan";
 import type { AnalysisRequest, PlanResponse } from "@hushmark/schemas";
 import { PlanCanvas } from "../../editor/canvas/plan-canvas";
 import { fitBounds, type Viewport } from "../../editor/model/viewport";
@@ -68,7 +68,7 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
 
   const zoomTo = (id: string) => {
     store.select([id]);
-    const piece = planWallPieces(store.plan).find((p) => p.id === id);
+    const piece = wallPieceById(store.plan, id);
     const b = piece ? { minX: Math.min(piece.start.x, piece.end.x), maxX: Math.max(piece.start.x, piece.end.x), minY: Math.min(piece.start.y, piece.end.y), maxY: Math.max(piece.start.y, piece.end.y) } : boundsOfMany(store.plan, [id]);
     const lvl = piece?.levelId ?? (selectedEl && "levelId" in selectedEl ? selectedEl.levelId : undefined);
     if (lvl && lvl !== levelId) setLevelId(lvl);
