@@ -108,3 +108,6 @@ export type { ScheduleRow } from "./exchange/element-schedule.js";
 export { elementScheduleCsv, SCHEDULE_COLUMNS } from "./exchange/schedule-csv.js";
 export { csvField, csvText } from "./exchange/csv-text.js";
 export { planJsonSchema, planJsonSchemaText, PLAN_JSON_SCHEMA_PATH } from "./exchange/plan-json-schema.js";
+export type { DxfBlock } from "./exchange/dxf-import-types.js";
+export { insertMaps } from "./exchange/dxf-blocks.js";
+export type { Affine } from "./exchange/dxf-blocks.js";

@@ -3,6 +3,7 @@ import type { Point, Room } from "../document/schema.js";
 import { boundsM, pointInPolygon, polygonAreaM2, polygonCentroid, polygonSelfIntersections } from "../geometry/polygon.js";
 import { polygonOverlapM2 } from "../geometry/overlap.js";
 import { distanceToLineM } from "../geometry/segments.js";
+import { affineMaxScale, affinePoint, affineThen, IDENTITY, insertMaps, type Affine } from "./dxf-blocks.js";
 import { entityShape } from "./dxf-entities.js";
 import type { DxfImport, DxfImportOptions, DxfLayerRole } from "./dxf-import-types.js";
 import { closedLoops, type TracedPath } from "./dxf-loops.js";
@@ -66,29 +67,58 @@ export function dxfConverter(options: DxfImportOptions, units: Extract<DxfUnits,
   let read = 0;
   const roleOf = (layer: string): DxfLayerRole => o.layerRoles[layer] ?? o.otherLayers ?? "underlay";
 
+  const blocks = options.blocks ?? {};
+  const maxDepth = 8;
+
+  // Shapes are made in the entity's own drawing units, then mapped through the block placements
+  // above it and scaled to metres; arcs are flattened finely enough for the largest stretch.
+  function place(entity: IEntity, parentLayer: string | null, map: Affine, handlePrefix: string, depth: number): "used" | "skipped" {
+    const own = entity.layer ?? "0";
+    // Entities on layer 0 inside a block take the layer of the INSERT that places them.
+    const layer = parentLayer !== null && own === "0" ? parentLayer : own;
+    const role = roleOf(layer);
+    const type = entity.type ?? "UNKNOWN";
+    const handle = `${handlePrefix}${entity.handle === undefined ? "" : String(entity.handle)}`;
+    if (role === "ignore") {
+      skipped.add(`on layer "${layer}", set to ignore`, type, [handle]);
+      return "skipped";
+    }
+    if (type === "INSERT") {
+      const insert = entity as unknown as { name?: string; inPaperSpace?: boolean };
+      const block = insert.name === undefined ? undefined : blocks[insert.name];
+      if (insert.inPaperSpace) { skipped.add("drawn on a paper-space layout, not the model", type, [handle]); return "skipped"; }
+      if (!block || !Array.isArray(block.entities)) { skipped.add("a block reference to a block the file does not define", type, [handle]); return "skipped"; }
+      if (depth >= maxDepth) { skipped.add(`blocks nested deeper than ${maxDepth} levels`, type, [handle]); return "skipped"; }
+      let any = false;
+      for (const cell of insertMaps(entity as unknown as Parameters<typeof insertMaps>[0], block.position)) {
+        for (const child of block.entities) if (place(child, layer, affineThen(map, cell), `${handle}.`, depth + 1) === "used") any = true;
+      }
+      if (!any) skipped.add("a block reference whose block holds nothing to import", type, [handle]);
+      return any ? "used" : "skipped";
+    }
+    const stretch = affineMaxScale(map) * units.metresPerUnit;
+    const shape = entityShape(entity, 1, o.chordToleranceM / stretch);
+    if (shape.kind === "skip") {
+      skipped.add(shape.reason, type, [handle]);
+      return "skipped";
+    }
+    const toPlan = (p: Point): Point => {
+      const q = affinePoint(map, p);
+      return { x: q.x * units.metresPerUnit, y: q.y * units.metresPerUnit };
+    };
+    if (shape.kind === "label") labels.push({ text: shape.text, at: toPlan(shape.at) });
+    else byRole[role].push({ layer, points: shape.points.map(toPlan), closed: shape.closed, handles: handle ? [handle] : [] });
+    return "used";
+  }
+
   function add(entities: readonly IEntity[]): number {
     for (const entity of entities) {
       read++;
       const type = entity.type ?? "UNKNOWN";
       const count = (byType[type] ??= { read: 0, used: 0, skipped: 0 });
       count.read++;
-      const layer = entity.layer ?? "0";
-      const role = roleOf(layer);
-      const handle = entity.handle === undefined ? "" : String(entity.handle);
-      if (role === "ignore") {
-        count.skipped++;
-        skipped.add(`on layer "${layer}", set to ignore`, type, [handle]);
-        continue;
-      }
-      const shape = entityShape(entity, units.metresPerUnit, o.chordToleranceM);
-      if (shape.kind === "skip") {
-        count.skipped++;
-        skipped.add(shape.reason, type, [handle]);
-        continue;
-      }
-      count.used++;
-      if (shape.kind === "label") labels.push({ text: shape.text, at: shape.at });
-      else byRole[role].push({ layer, points: shape.points, closed: shape.closed, handles: handle ? [handle] : [] });
+      if (place(entity, null, IDENTITY, "", 0) === "used") count.used++;
+      else count.skipped++;
     }
     return read;
   }

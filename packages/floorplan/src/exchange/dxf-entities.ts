@@ -27,7 +27,6 @@ interface Loose {
 }
 
 const SKIP_REASONS: Record<string, string> = {
-  INSERT: "block references (symbols) are not expanded; explode them in CAD to import their lines",
   SPLINE: "splines are not converted; trace them over the underlay or convert them to polylines in CAD",
   ELLIPSE: "ellipses are not converted",
   DIMENSION: "dimensions are annotation, not geometry",

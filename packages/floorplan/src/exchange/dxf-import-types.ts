@@ -1,3 +1,4 @@
+import type { IEntity } from "dxf-parser";
 import type { Door, Point, Room, RoomUse, Window } from "../document/schema.js";
 import type { TracedPath } from "./dxf-loops.js";
 import type { DxfProblem } from "./dxf-scan.js";
@@ -5,6 +6,12 @@ import type { DxfUnitChoice, DxfUnits } from "./dxf-units.js";
 
 /** What the surveyor says a DXF layer holds. */
 export type DxfLayerRole = "walls" | "doors" | "windows" | "underlay" | "ignore";
+
+/** A block definition as the DXF reader gives it: base point and entities in block units. */
+export interface DxfBlock {
+  position?: { x?: number; y?: number };
+  entities?: IEntity[];
+}
 
 export interface DxfImportOptions {
   /** The plan level the rooms and the underlay go on. */
@@ -25,6 +32,8 @@ export interface DxfImportOptions {
   roomUse?: RoomUse;
   door?: { heightM: number; constructionId: string };
   window?: { heightM: number; sillM: number; constructionId: string };
+  /** Block definitions for expanding INSERTs (`importDxf` passes the file's own). */
+  blocks?: Record<string, DxfBlock>;
 }
 
 /** Line work kept to trace over, in plan metres on the import's level. */

@@ -59,11 +59,25 @@ function flatDxf(opts: { units?: boolean } = {}): string {
   (d as unknown as { drawSpline(points: number[][], degree: number): void }).drawSpline([[0, 0], [1000, 500], [2000, 0], [3000, 200]], 3);
   d.setActiveLayer("dims");
   d.drawLine(0, -3 * MM, 4 * MM, -3 * MM);
-  const text = d.toDxfString();
-  // Splice the old-style POLYLINE in before the ENTITIES section ends.
+  let text = d.toDxfString();
+  // Splice the old-style POLYLINE and a door block placed turned by 90° in before the ENTITIES section ends.
   const at = text.indexOf("0\nENDSEC", text.indexOf("ENTITIES"));
-  return text.slice(0, at) + polylineGroups("walls", "A0", [[0, 0], [0, -2, 0.5], [4, -2], [4, 0]]) + text.slice(at);
+  text = text.slice(0, at) + polylineGroups("walls", "A0", [[0, 0], [0, -2, 0.5], [4, -2], [4, 0]]) + groups(DOOR_INSERT) + text.slice(at);
+  const blocks = text.indexOf("2\nBLOCKS\n") + "2\nBLOCKS\n".length;
+  return text.slice(0, blocks) + groups(DOOR_BLOCK) + text.slice(blocks);
 }
+
+const groups = (g: Array<[number, string | number]>) => g.map(([c, v]) => `${c}\n${v}\n`).join("");
+
+/** A 900 mm door symbol, hinge at the base point: leaf along +x and its quarter swing, on layer 0. */
+const DOOR_BLOCK: Array<[number, string | number]> = [
+  [0, "BLOCK"], [5, "B1"], [8, "0"], [2, "DOOR900"], [70, 0], [10, 0], [20, 0], [30, 0], [3, "DOOR900"],
+  [0, "LINE"], [5, "B2"], [8, "0"], [10, 0], [20, 0], [30, 0], [11, 900], [21, 0], [31, 0],
+  [0, "ARC"], [5, "B3"], [8, "0"], [10, 0], [20, 0], [30, 0], [40, 900], [50, 0], [51, 90],
+  [0, "ENDBLK"], [5, "B4"], [8, "0"],
+];
+/** The door block on the studio–store wall: hinge at (1 m, 0), turned 90° so the leaf points into the studio. */
+const DOOR_INSERT: Array<[number, string | number]> = [[0, "INSERT"], [5, "C1"], [8, "doors"], [2, "DOOR900"], [10, 1000], [20, 0], [30, 0], [41, 1], [42, 1], [50, 90]];
 
 const roles: DxfImportOptions = {
   levelId: "level-0",
@@ -134,7 +148,7 @@ describe("DXF import", () => {
     if (!merged.ok) throw new Error(merged.problem.message);
     const plan = merged.plan;
     const pieces = planWallPieces(plan);
-    const door = imported.openings.find((o) => o.type === "door")!;
+    const door = imported.openings.find((o) => o.type === "door" && !o.id.includes("."))!;
     const window = imported.openings.find((o) => o.type === "window")!;
     expect(door.widthM).toBeCloseTo(0.9, 6);
     expect(window.widthM).toBeCloseTo(1, 6);
@@ -145,6 +159,22 @@ describe("DXF import", () => {
     expect(pieces.find((p) => p.id === dp.hostId)!.kind).toBe("shared");
     expect(Math.min(wp.start.y, wp.end.y)).toBeCloseTo(1, 6);
     expect(wp.start.x).toBeCloseTo(0, 9);
+  });
+
+  it("expands a block reference: the turned door symbol becomes a door on the studio–store wall", () => {
+    const merged = planWithDxfImport(emptyPlan({ id: "flat", name: "Invented flat" }), imported);
+    if (!merged.ok) throw new Error(merged.problem.message);
+    const door = imported.openings.find((o) => o.id === "dxf-door-C1.B2")!;
+    expect(door).toBeDefined();
+    expect(door.widthM).toBeCloseTo(0.9, 6);
+    const pieces = planWallPieces(merged.plan);
+    const place = openingPlacement(merged.plan, pieces, door, 0.05);
+    if (!place.ok) throw new Error("block door not placed");
+    expect([place.start.x, place.end.x].sort((a, b) => a - b).map((x) => Math.round(x * 1e6) / 1e6)).toEqual([0.1, 1]);
+    expect(place.start.y).toBeCloseTo(0, 9);
+    const piece = pieces.find((p) => p.id === place.hostId)!;
+    expect(piece.sides.map((s) => merged.plan.elements[s.roomId]!).map((r) => (r as { name: string }).name).sort()).toEqual(["Store", "Studio"]);
+    expect(imported.report.byType.INSERT).toEqual({ read: 1, used: 1, skipped: 0 });
   });
 
   it("keeps furniture as underlay, leaves out the ignored layer and the spline, and says why", () => {

@@ -31,7 +31,7 @@ export function importDxf(text: string, options: DxfImportOptions, onProgress?: 
   if (units.status === "missing") {
     return { ok: false, problem: { code: "dxf-units-missing", message: units.message }, units, layerNames: source.layerNames };
   }
-  const converter = dxfConverter(options, units);
+  const converter = dxfConverter({ blocks: source.blocks, ...options }, units);
   try {
     for (const chunk of source.chunks(chunkSize)) {
       converter.add(chunk.entities);

@@ -1,5 +1,6 @@
 import * as dxfParserModule from "dxf-parser";
 import type { IDxf, IEntity } from "dxf-parser";
+import type { DxfBlock } from "./dxf-import-types.js";
 import { dxfLayout, type DxfLayout, type DxfProblem } from "./dxf-scan.js";
 import { dxfUnitsFromHeader, type DxfUnits } from "./dxf-units.js";
 
@@ -21,6 +22,8 @@ export interface DxfSource {
   /** Layer names from the LAYER table (entities may also name layers that are not in it). */
   layerNames: string[];
   entityCount: number;
+  /** Block definitions from the BLOCKS section, for expanding INSERTs. */
+  blocks: Record<string, DxfBlock>;
   /** Entities per layer, counted while scanning. */
   layerEntityCounts: Record<string, number>;
   /** Parses the entities `size` at a time, in file order; `done` counts entities parsed so far. */
@@ -56,6 +59,7 @@ export function dxfSource(text: string): { ok: true; source: DxfSource } | { ok:
     layerNames,
     entityCount: starts.length,
     layerEntityCounts: layout.layerEntityCounts,
+    blocks: (head.dxf.blocks ?? {}) as Record<string, DxfBlock>,
     *chunks(size = 2000) {
       for (let i = 0; i < starts.length; i += size) {
         const from = starts[i]!;
