@@ -175,7 +175,7 @@ describe("brief, measurements, recordings and photos", () => {
   it("analyses a stereo 16-bit recording in a job whose progress reaches 100 %", async () => {
     const wav = toneWav({ seconds: 20, rate: 44_100, channels: 2, depth: "16", burst: { at: 8, len: 4 } });
     const res = await upload(surveyor, projectId, wav, "../../etc/passwd.wav");
-    expect(res.status).toBe(202);
+    expect(res.status, JSON.stringify(res.body)).toBe(202);
     expect(res.body.status).toBe("processing");
     const seen: number[] = [];
     const done = await waitReady(surveyor, projectId, res.body.id, seen);
@@ -209,6 +209,15 @@ describe("brief, measurements, recordings and photos", () => {
     expect(body.length).toBe(44 + 22_050 * 4);
     const back = new WaveFile(body);
     expect((back.fmt as { sampleRate: number }).sampleRate).toBe(44_100);
+  });
+
+  it("leaves bands of digital silence empty", async () => {
+    const w = new WaveFile();
+    w.fromScratch(1, 8000, "16", new Int16Array(8000 * 2));
+    const res = await upload(surveyor, projectId, Buffer.from(w.toBuffer()), "silence.wav");
+    const done = await waitReady(surveyor, projectId, res.body.id);
+    expect(done.status).toBe("ready");
+    expect(done.leqDb.every((v: number | null) => v === null)).toBe(true);
   });
 
   it("reads 24-bit and 32-bit float recordings at other rates", async () => {

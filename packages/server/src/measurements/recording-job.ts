@@ -73,13 +73,15 @@ export function recordingQueue(dataSource: DataSource, files: FilesService, logg
           if (options.chunkDelayMs) await sleep(options.chunkDelayMs);
         }
         const r = analyzer.finish();
+        // Below any converter's noise floor a band holds digital silence, not a level.
+        const heard = (levels: (number | null)[]) => levels.map((v) => (v === null || v - m.calibrationDb < -150 ? null : v));
         const settings = m.eventSettings ?? { marginDb: 10, minDurationS: 2 };
         const events = r.history && r.la90Db !== null ? detectEvents(r.history, { backgroundDb: r.la90Db, ...settings }) : [];
         const history = r.history ? { ...r.history, bandsDb: r.history.laeqDb.length <= MAX_BAND_HISTORY_S ? r.history.bandsDb : null } : null;
         await repo.update(
           { id: m.id, status: "processing" },
           {
-            status: "ready", progress: 1, error: null, leqDb: r.leqDb, lmaxDb: r.lmaxDb, l10Db: r.l10Db, l90Db: r.l90Db,
+            status: "ready", progress: 1, error: null, leqDb: heard(r.leqDb), lmaxDb: heard(r.lmaxDb), l10Db: heard(r.l10Db), l90Db: heard(r.l90Db),
             summary: { laeqDb: r.laeqDb, lafmaxDb: r.lafmaxDb, la10Db: r.la10Db, la90Db: r.la90Db, durationS: r.durationS, sampleRateHz: format.sampleRateHz, channels: format.channels },
             timeHistory: history as never, events: events as never,
           },
