@@ -5,6 +5,7 @@ export interface Affine {
   a: number; b: number; c: number; d: number; e: number; f: number;
 }
 
+/** The map that leaves every point where it is. */
 export const IDENTITY: Affine = { a: 1, b: 0, c: 0, d: 1, e: 0, f: 0 };
 
 /** The map applying `inner` first, then `outer` (no unit). */

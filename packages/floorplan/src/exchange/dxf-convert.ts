@@ -1,6 +1,6 @@
 import type { IEntity } from "dxf-parser";
 import type { Point, Room } from "../document/schema.js";
-import { boundsM, pointInPolygon, polygonAreaM2, polygonCentroid, polygonSelfIntersections } from "../geometry/polygon.js";
+import { boundsM, pointInPolygon, polygonAreaM2, polygonSelfIntersections } from "../geometry/polygon.js";
 import { polygonOverlapM2 } from "../geometry/overlap.js";
 import { distanceToLineM } from "../geometry/segments.js";
 import { affineMaxScale, affinePoint, affineThen, IDENTITY, insertMaps, type Affine } from "./dxf-blocks.js";
@@ -227,9 +227,4 @@ export function dxfConverter(options: DxfImportOptions, units: Extract<DxfUnits,
     };
   }
   return { add, finish };
-}
-
-/** The centre of an imported room, for placing its label (m). */
-export function roomLabelPoint(room: Room): Point {
-  return polygonCentroid(room.outline);
 }

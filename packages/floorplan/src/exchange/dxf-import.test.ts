@@ -223,6 +223,11 @@ describe("DXF import: units and damaged files", () => {
     expect(chosen.ok && chosen.imported.rooms.length).toBe(4);
   });
 
+  it("reads a file saved with a byte-order mark and Windows line ends", () => {
+    const r = importDxf(`\uFEFF${FLAT.replace(/\n/g, "\r\n")}`, roles);
+    expect(r.ok && r.imported.rooms.map((room) => room.name).sort()).toEqual(["Booth", "Lobby", "Store", "Studio"]);
+  });
+
   it("lists the layers with their entity counts for the mapping dialog", () => {
     const survey = dxfSurvey(flatDxf());
     if (!survey.ok) throw new Error(survey.problem.message);

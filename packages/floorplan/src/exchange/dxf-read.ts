@@ -45,7 +45,9 @@ const TAIL = "0\nENDSEC\n0\nEOF\n";
  * Opens a DXF text file: checks every group, reads the header and layer table, and prepares the
  * ENTITIES section to be parsed in chunks (so a worker can report progress on large files).
  */
-export function dxfSource(text: string): { ok: true; source: DxfSource } | { ok: false; problem: DxfProblem } {
+export function dxfSource(raw: string): { ok: true; source: DxfSource } | { ok: false; problem: DxfProblem } {
+  // Some Windows tools start text files with a byte-order mark, which is not a group code.
+  const text = raw.charCodeAt(0) === 0xfeff ? raw.slice(1) : raw;
   const scanned = dxfLayout(text);
   if (!scanned.ok) return scanned;
   const layout: DxfLayout = scanned.layout;
