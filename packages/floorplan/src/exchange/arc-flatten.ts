@@ -3,9 +3,11 @@ import type { Point } from "../document/schema.js";
 /** Segments needed so no chord strays more than `chordToleranceM` from an arc of radius `radiusM` sweeping `sweepRad` (count). */
 export function arcSegmentCount(radiusM: number, sweepRad: number, chordToleranceM: number): number {
   const sweep = Math.abs(sweepRad);
-  if (radiusM <= 0 || sweep === 0) return 1;
+  if (!(radiusM > 0) || !(sweep > 0) || !Number.isFinite(sweep)) return 1;
+  // A zero, negative or missing tolerance would ask for infinitely many chords.
+  const tol = chordToleranceM > 1e-6 ? chordToleranceM : 1e-6;
   // The sagitta of a chord subtending angle a is r·(1 − cos(a/2)); solve for the largest a within tolerance.
-  const ratio = 1 - Math.min(chordToleranceM / radiusM, 1);
+  const ratio = 1 - Math.min(tol / radiusM, 1);
   const maxStep = 2 * Math.acos(ratio);
   return Math.max(1, Math.ceil(sweep / Math.max(maxStep, 1e-6)));
 }
