@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useState } from "react";
+import { useEffect, useState } from "react";
 import type { Command } from "@hushmark/editor-core";
 import { DXF_UNIT_CHOICES, type DxfImport, type DxfLayerRole, type DxfSurvey, type DxfUnitChoice, type Plan } from "@hushmark/floorplan";
 import { Button } from "../../../components/ui/button";
@@ -24,8 +24,15 @@ type Step =
 export function DxfImportDialog({ open, onClose, plan, levelId, onCommand, runner: given }: {
   open: boolean; onClose: () => void; plan: Plan; levelId: string; onCommand: (cmd: Command) => void; runner?: DxfRunner;
 }) {
-  const runner = useMemo(() => given ?? (open ? defaultDxfRunner() : null), [given, open]);
-  useEffect(() => () => { if (!given) runner?.dispose(); }, [runner, given]);
+  const [runner, setRunner] = useState<DxfRunner | null>(given ?? null);
+  // The worker lives while the dialog is open; a large conversion is abandoned with it on close.
+  useEffect(() => {
+    if (given) { setRunner(given); return; }
+    if (!open) return;
+    const r = defaultDxfRunner();
+    setRunner(r);
+    return () => { r.dispose(); setRunner(null); };
+  }, [given, open]);
   const [step, setStep] = useState<Step>({ kind: "pick" });
   const [file, setFile] = useState<File | null>(null);
   const [roles, setRoles] = useState<Record<string, DxfLayerRole>>({});
