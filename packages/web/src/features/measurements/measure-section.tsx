@@ -76,7 +76,7 @@ export default function MeasureSection({ projectId }: { projectId: string }) {
           )}
         </Card>
         <div className="flex min-w-0 flex-col gap-4">
-          {compared.length >= 2 ? <Comparison measurements={compared} /> : null}
+          {compared.length >= 2 ? <Comparison projectId={projectId} measurements={compared} /> : null}
           {current ? (
             <MeasurementDetail
               key={current}
