@@ -30,8 +30,8 @@ export const workOrderListSchema = z.object({ workOrders: z.array(workOrderSchem
 
 export const taskParamSchema = z.object({ taskId: z.uuid("That checklist item id is not valid.") });
 export const taskUpdateSchema = z
-  .object({ status: taskStatusSchema.optional(), assigneeMembershipId: z.uuid("Pick a person from the firm.").nullable().optional() })
-  .refine((v) => v.status !== undefined || v.assigneeMembershipId !== undefined, "Change the status or the assignee.");
+  .object({ status: taskStatusSchema.optional(), assigneeMembershipId: z.uuid("Pick a person from the firm.").nullable().optional(), assignToMe: z.literal(true).optional() })
+  .refine((v) => v.status !== undefined || v.assigneeMembershipId !== undefined || v.assignToMe, "Change the status or the assignee.");
 
 const bandLevels = z.array(z.number().finite().min(-20).max(160), "Give one level per band.").length(21, "Give 21 one-third-octave levels, 50 to 5000 Hz.");
 

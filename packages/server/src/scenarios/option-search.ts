@@ -3,7 +3,7 @@
  * the engine (`bestWithinLimits`, `costLevelFrontier`) over every price book upgrade that fits
  * each chosen element. Pure; runs in a worker thread so a long search can be cancelled.
  */
-import { bestWithinLimits, costLevelFrontier, type SearchLimits } from "@hushmark/acoustics";
+import { bestWithinLimits, costLevelFrontier, type SearchLimits, type UpgradePlanner } from "@hushmark/acoustics";
 import type { Catalogue } from "@hushmark/floorplan";
 import type { OptionSearchResult, PriceBookItem, ScenarioSetup, SearchLimitsInput } from "@hushmark/schemas";
 import { plannerFor, type PickedUpgrade } from "./scenario-evaluate.js";
@@ -94,7 +94,7 @@ export function runOptionSearch(task: OptionSearchTask, progress: Progress = () 
       whyNot: `Saves ${(best.result.cost - cheaper.cost).toFixed(2)} but leaves about ${(cheaper.dba - chosenDba).toFixed(1)} dB more${missesTarget ? ", and the target is not reached" : ""}.`,
     });
   }
-  const targetDba = task.setup.target?.kind === "dba" ? task.setup.target.dba : task.setup.target?.kind === "reduction" ? planner.baseDba - task.setup.target.reductionDb : null;
+  const targetDba = task.setup.target?.kind === "dba" ? task.setup.target.dba : task.setup.target?.kind === "reduction" ? planner.baseDba - task.setup.target.reductionDb : ncTargetDba(planner, frontier.points);
   const base = planner.describe([]);
   return {
     ok: true,
@@ -118,4 +118,18 @@ export function runOptionSearch(task: OptionSearchTask, progress: Progress = () 
       targetDba,
     },
   };
+}
+
+/**
+ * An NC target has no single dBA figure; on the chart it is drawn at the loudest frontier point
+ * that meets it (the engine's shortfall check), or left out when none does.
+ */
+function ncTargetDba(planner: UpgradePlanner, points: readonly { dba: number; options: readonly string[] }[]): number | null {
+  let loudest: number | null = null;
+  for (const p of points) {
+    const indices = p.options.map((id) => planner.prepared.findIndex((x) => x.option.id === id));
+    const r = planner.describe(indices);
+    if (r.shortfall?.met && (loudest === null || r.dba > loudest)) loudest = r.dba;
+  }
+  return loudest;
 }

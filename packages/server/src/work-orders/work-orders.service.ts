@@ -53,7 +53,9 @@ export function createWorkOrdersService(dataSource: DataSource, deps: { projects
     }));
   }
 
-  async function updateTask(actor: Actor, taskId: string, patch: { status?: "todo" | "doing" | "done" | undefined; assigneeMembershipId?: string | null | undefined }): Promise<WorkOrder[]> {
+  async function updateTask(actor: Actor, taskId: string, input: { status?: "todo" | "doing" | "done" | undefined; assigneeMembershipId?: string | null | undefined; assignToMe?: true | undefined }): Promise<WorkOrder[]> {
+    const { assignToMe, ...rest } = input;
+    const patch = assignToMe ? { ...rest, assigneeMembershipId: actor.membershipId } : rest;
     const task = await tasks.findOne({ where: { id: taskId } });
     const order = task ? await orders.findOne({ where: { id: task.workOrderId, organizationId: actor.organizationId } }) : null;
     if (!task || !order) throw notFound("That checklist item");

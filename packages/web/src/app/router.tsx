@@ -15,6 +15,10 @@ import { ProjectsRoute } from "./routes/projects";
 import { ResetPasswordRoute } from "./routes/reset-password";
 import { SignInRoute } from "./routes/sign-in";
 import { SignUpRoute } from "./routes/sign-up";
+import { lazy, Suspense } from "react";
+
+const PriceBookRoute = lazy(() => import("../features/price-book/price-book-route"));
+const PortalRoute = lazy(() => import("../features/portal/portal-route"));
 
 export const routes: RouteObject[] = [
   {
@@ -47,6 +51,8 @@ export const routes: RouteObject[] = [
           },
           { path: paths.people, element: <PeopleRoute /> },
           { path: paths.account, element: <AccountRoute /> },
+          { path: paths.priceBook, element: <Suspense><PriceBookRoute /></Suspense> },
+          { path: "/portal/proposals/:proposalId", element: <Suspense><PortalRoute /></Suspense> },
         ],
       },
     ],

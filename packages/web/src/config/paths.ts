@@ -11,6 +11,7 @@ export const paths = {
   projectSection: (projectId: string, section: string) => `/projects/${encodeURIComponent(projectId)}/${section}`,
   people: "/people",
   account: "/account",
+  priceBook: "/price-book",
 } as const;
 
 /** Where to go after signing in: only a path on this site, never another origin. */

@@ -52,6 +52,11 @@ export function SignedInLayout() {
             <NavLink to={paths.projects} className={navClasses}>
               Projects
             </NavLink>
+            {can.seeAllSections(role) ? (
+              <NavLink to={paths.priceBook} className={navClasses}>
+                Price book
+              </NavLink>
+            ) : null}
             {can.managePeople(role) ? (
               <NavLink to={paths.people} className={navClasses}>
                 People

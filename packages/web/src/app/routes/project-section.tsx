@@ -1,4 +1,4 @@
-import { lazy, Suspense, useEffect } from "react";
+import { lazy, Suspense, useEffect, type ComponentType, type LazyExoticComponent } from "react";
 import { useQueryClient } from "@tanstack/react-query";
 import { planQueryOptions } from "../../features/projects/api/get-plan";
 import { useParams } from "react-router-dom";
@@ -14,6 +14,12 @@ const SketchSection = lazy(() => import("../../features/editor/sketch-section"))
 const PathsSection = lazy(() => import("../../features/paths/paths-section"));
 const BriefSection = lazy(() => import("../../features/intake/brief-section"));
 const MeasureSection = lazy(() => import("../../features/measurements/measure-section"));
+const moneySections: Record<string, LazyExoticComponent<ComponentType<{ projectId: string }>>> = {
+  options: lazy(() => import("../../features/scenarios/options-section")),
+  proposal: lazy(() => import("../../features/proposals/proposal-section")),
+  jobs: lazy(() => import("../../features/jobs/jobs-section")),
+  verify: lazy(() => import("../../features/verify/verify-section")),
+};
 
 export function ProjectSectionRoute({ section }: { section: ProjectSection }) {
   const { projectId = "" } = useParams();
@@ -50,6 +56,15 @@ export function ProjectSectionRoute({ section }: { section: ProjectSection }) {
     return (
       <Suspense fallback={<PageLoading label="Opening the plan" />}>
         <PathsSection projectId={projectId} />
+      </Suspense>
+    );
+  }
+
+  const MoneyScreen = moneySections[section.slug];
+  if (MoneyScreen) {
+    return (
+      <Suspense fallback={<PageLoading label={`Opening ${section.label}`} />}>
+        <MoneyScreen projectId={projectId} />
       </Suspense>
     );
   }
