@@ -108,6 +108,28 @@ describe("Brief and Measure", () => {
     await context.close();
   });
 
+  it("compares a measured level difference with the one predicted from the plan", async () => {
+    const { context, page, errors } = await newPage(browser);
+    await signIn(page, baseUrl);
+    const projects = (await (await page.request.get(`${baseUrl}/api/v1/projects`)).json()) as { projects: { id: string; title: string }[] };
+    const demo = projects.projects.find((p) => p.title.startsWith("Fernhollow"))!;
+    const add = (label: string, kind: string, roomId: string, top: number) =>
+      page.request.post(`${baseUrl}/api/v1/projects/${demo.id}/measurements`, { data: { label, kind, roomId, takenAt: "2026-05-02T10:00:00Z", source: "manual", leqDb: Array.from({ length: 21 }, (_, i) => top - i * 0.8) } });
+    expect((await add("E2E café counter", "source_side", "cafe", 78)).status()).toBe(201);
+    expect((await add("E2E recording room", "receiver_side", "record", 40)).status()).toBe(201);
+    await page.goto(`${baseUrl}/projects/${demo.id}/measure`);
+    await page.getByLabel("Compare E2E café counter").check();
+    await page.getByLabel("Compare E2E recording room").check();
+    await expect(page.getByRole("heading", { name: /Measured level difference/ }).textContent()).resolves.toMatch(/38\.0 dBA overall/);
+    await page.getByRole("button", { name: "Compare with the prediction from the plan" }).click();
+    await page.getByText(/Predicted from the plan/).waitFor({ timeout: 30_000 });
+    const rows = page.getByTestId("difference-table").locator("tr");
+    expect(await rows.count()).toBe(3);
+    await expect(rows.nth(2).textContent()).resolves.toMatch(/^Predicted(-?\d+\.\d)+/);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
   it("saves the brief as the surveyor types and explains the target", async () => {
     const { context, page, errors } = await newPage(browser);
     await signIn(page, baseUrl);
