@@ -6,6 +6,7 @@ import { distanceToLineM } from "../geometry/segments.js";
 import { affineMaxScale, affinePoint, affineThen, IDENTITY, insertMaps, type Affine } from "./dxf-blocks.js";
 import { entityShape } from "./dxf-entities.js";
 import type { DxfImport, DxfImportOptions, DxfLayerRole } from "./dxf-import-types.js";
+import { lineNetworkFaces, MAX_FACE_SEGMENTS, MIN_FACE_WIDTH_M } from "./dxf-faces.js";
 import { closedLoops, type TracedPath } from "./dxf-loops.js";
 import { openingsFromDrawings, safeId } from "./dxf-openings.js";
 import { ReportLines } from "./dxf-report.js";
@@ -125,11 +126,24 @@ export function dxfConverter(options: DxfImportOptions, units: Extract<DxfUnits,
 
   function finish(): DxfImport {
     const candidates: TracedPath[] = byRole.walls.filter((p) => p.closed);
-    const { loops, leftover } = closedLoops(byRole.walls.filter((p) => !p.closed), o.snapM);
-    for (const p of leftover) toUnderlay.add("wall lines that do not close into an outline (or meet three or more at a point)", "path", p.handles);
-    const underlayPaths: TracedPath[] = [...byRole.underlay, ...leftover];
+    const open = byRole.walls.filter((p) => !p.closed);
+    // Open wall lines enclose rooms as the faces of their network (split where lines cross or end
+    // on one another); past the size limit only chains that close end to end count.
+    let net = lineNetworkFaces(open, o.snapM, MIN_ROOM_AREA_M2);
+    let faces = net.faces;
+    if (net.tooMany) {
+      const { loops, leftover } = closedLoops(open, o.snapM);
+      faces = loops;
+      net = { faces: loops, thin: [], unused: leftover, tooMany: true };
+    }
+    const reason = net.tooMany
+      ? `wall lines that do not close end to end (over ${MAX_FACE_SEGMENTS} loose segments, so crossings were not looked for)`
+      : "wall lines that enclose no room";
+    for (const p of net.unused) toUnderlay.add(reason, "path", p.handles);
+    for (const f of net.thin) toUnderlay.add(`a strip under ${MIN_FACE_WIDTH_M} m wide between wall lines (a wall drawn with two lines?)`, "outline", f.handles);
+    const underlayPaths: TracedPath[] = [...byRole.underlay, ...net.unused, ...net.thin];
     const outlines: Array<{ path: TracedPath; points: Point[]; areaM2: number }> = [];
-    for (const path of [...candidates, ...loops]) {
+    for (const path of [...candidates, ...faces]) {
       const points = cleanOutline(path.points, o.snapM);
       const areaM2 = points.length >= 3 ? polygonAreaM2(points) : 0;
       let reason: string | null = null;
