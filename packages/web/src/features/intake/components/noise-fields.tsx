@@ -40,13 +40,13 @@ export function NoiseFields({ control, register, readOnly }: { control: Control<
       {fields.length === 0 ? <p className="text-[15px] text-muted">No noises yet. Add each sound the client wants dealt with.</p> : null}
       {fields.map((field, i) => (
         <div key={field.key} className="flex flex-col gap-3 rounded-md border border-rule p-4" data-testid="brief-noise">
-          <div className="grid gap-3 md:grid-cols-3">
+          <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
             <Select label="Kind of noise" disabled={readOnly} options={Object.entries(noiseKindLabels).map(([value, label]) => ({ value, label }))} {...register(`noises.${i}.kind`)} />
             <Input label="Where it comes from" placeholder="e.g. café grinder behind the party wall" disabled={readOnly} {...register(`noises.${i}.where`)} />
-            <Select label="Keep it" disabled={readOnly} options={[{ value: "keep_out", label: "Out (it comes from outside the room)" }, { value: "keep_in", label: "In (it is made in the room)" }]} {...register(`noises.${i}.direction`)} />
+            <Select label="Keep it in or out" disabled={readOnly} options={[{ value: "keep_out", label: "Keep it out (made elsewhere)" }, { value: "keep_in", label: "Keep it in (made in the room)" }]} {...register(`noises.${i}.direction`)} />
           </div>
           <Controller control={control} name={`noises.${i}.times`} render={({ field: f }) => <Chips legend="When in the day" labels={timeLabels} value={f.value} onChange={f.onChange} disabled={readOnly} />} />
-          <div className="grid gap-3 md:grid-cols-2">
+          <div className="grid gap-3 lg:grid-cols-2">
             <Controller control={control} name={`noises.${i}.days`} render={({ field: f }) => <Chips legend="Which days" labels={dayLabels} value={f.value} onChange={f.onChange} disabled={readOnly} />} />
             <Controller control={control} name={`noises.${i}.seasons`} render={({ field: f }) => <Chips legend="Seasons (leave empty for all year)" labels={seasonLabels} value={f.value} onChange={f.onChange} disabled={readOnly} />} />
           </div>
