@@ -11,7 +11,12 @@ const ofType = (doc: Doc, type: string) => Object.values(doc.elements).filter((e
 
 async function openSketch(page: Page, baseUrl: string, projectId: string): Promise<void> {
   await page.goto(`${baseUrl}/projects/${projectId}/sketch`);
-  await page.getByTestId("plan-canvas").waitFor();
+  try {
+    await page.getByTestId("plan-canvas").waitFor({ timeout: 20_000 });
+  } catch (error) {
+    // Say what the page shows instead, so a failure here explains itself.
+    throw new Error(`the Sketch canvas did not appear; the page says: ${(await page.locator("main").innerText()).slice(0, 400)}`, { cause: error });
+  }
 }
 
 /** Selects an element through the accessible element list, the keyboard route to everything on the canvas. */

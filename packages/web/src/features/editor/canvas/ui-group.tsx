@@ -44,7 +44,9 @@ function ProblemMarkers({ plan, problems, v }: { plan: Plan; problems: readonly 
         const b = elementBounds(plan, p.elementId) ?? boundsOfPiece(plan, p.elementId);
         if (!b) return null;
         seen.add(p.elementId);
-        const s = toScreen(v, (b.minX + b.maxX) / 2, b.maxY);
+        // Rooms carry the badge on their top edge; smaller things at their middle, where they are.
+        const kind = plan.elements[p.elementId]?.type;
+        const s = toScreen(v, (b.minX + b.maxX) / 2, kind === "room" || kind === "void" ? b.maxY : (b.minY + b.maxY) / 2);
         const colour = p.severity === "error" ? danger : focus;
         return (
           <Group key={p.elementId} x={s.x} y={s.y}>

@@ -44,15 +44,20 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
   const fitted = useRef(false);
 
   const fit = useCallback(() => setViewport(fitBounds(planBounds(store.plan, levelId), canvas.width, canvas.height)), [store, levelId, canvas.width, canvas.height]);
+  // Until the person moves the view, it follows the canvas size (the layout settles after the first measure).
   useEffect(() => {
-    if (!fitted.current && canvas.width > 0) { fitted.current = true; fit(); }
-  }, [canvas.width, fit]);
+    if (!fitted.current && canvas.width > 0 && canvas.height > 0) fit();
+  }, [canvas.width, canvas.height, fit]);
+  const moveView = useCallback((update: (v: Viewport) => Viewport) => {
+    fitted.current = true;
+    setViewport(update);
+  }, []);
 
   const envRef = useRef<ToolEnv>({ store, levelId, unit: plan.displayUnit, gridM: 0.05, toleranceM: 0.2 });
   Object.assign(envRef.current, {
     levelId, unit: plan.displayUnit, toleranceM: 12 / viewport.scale,
     gridM: viewport.scale >= 80 ? 0.05 : viewport.scale >= 30 ? 0.1 : 0.25,
-    pan: (d: { x: number; y: number }) => setViewport((v) => ({ ...v, ox: v.ox + d.x * v.scale, oy: v.oy - d.y * v.scale })),
+    pan: (d: { x: number; y: number }) => moveView((v) => ({ ...v, ox: v.ox + d.x * v.scale, oy: v.oy - d.y * v.scale })),
     done: () => setToolId("select"),
   });
   const tool = useMemo(() => (readOnly ? null : createTool(toolId, envRef.current)), [toolId, readOnly]);
@@ -70,7 +75,7 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
     if (b) setViewport((v) => { const f = fitBounds(b, canvas.width, canvas.height, 120); return f.scale < v.scale ? f : { ...v, ox: canvas.width / 2 - ((b.minX + b.maxX) / 2) * v.scale, oy: canvas.height / 2 + ((b.minY + b.maxY) / 2) * v.scale }; });
   };
 
-  const onKeyDown = editorKeyHandler({ store, tool, levelId, setTool: setToolId, setViewport, fit, size: canvas, clipboard, readOnly });
+  const onKeyDown = editorKeyHandler({ store, tool, levelId, setTool: setToolId, setViewport: moveView, fit, size: canvas, clipboard, readOnly });
   const hint = tool?.overlay.hint;
 
   return (
@@ -93,7 +98,7 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
         <div className="flex min-h-0 flex-1">
           {!readOnly ? <ToolRail active={toolId} onPick={setToolId} /> : null}
           <div className="flex min-h-0 min-w-0 flex-1 flex-col">
-            <div ref={canvas.ref} className="min-h-0 flex-1">
+            <div ref={canvas.ref} className="min-h-0 flex-1" onPointerDownCapture={() => { fitted.current = true; }}>
               <PlanCanvas
                 ref={canvasRef}
                 plan={plan}
@@ -103,7 +108,7 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
                 selection={selection}
                 problems={problems}
                 viewport={viewport}
-                setViewport={setViewport}
+                setViewport={moveView}
                 width={canvas.width}
                 height={canvas.height}
                 tool={tool}
@@ -115,7 +120,7 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
             <StatusLine status={readOnly ? null : status} unit={plan.displayUnit} onUnit={readOnly ? undefined : (u) => store.run(setPlanUnit(u))} scale={viewport.scale} problems={counts} onProblems={() => setSide("problems")} hint={hint} />
           </div>
         </div>
-        <aside aria-label="Selection and lists" className="flex max-h-[42%] min-h-0 flex-col border-t border-rule lg:max-h-none lg:w-[340px] lg:border-l lg:border-t-0">
+        <aside aria-label="Selection and lists" className="flex h-[40%] min-h-0 shrink-0 flex-col border-t border-rule lg:h-auto lg:w-[340px] lg:border-l lg:border-t-0">
           <div role="tablist" aria-label="Side panel" className="flex border-b border-rule">
             {(["details", "elements", "problems"] as const).map((t) => (
               <button key={t} role="tab" type="button" aria-selected={side === t} onClick={() => setSide(t)} className={`min-h-11 flex-1 border-b-[3px] text-[14px] font-medium ${side === t ? "border-brand text-brand-strong" : "border-transparent text-muted hover:text-ink"}`}>

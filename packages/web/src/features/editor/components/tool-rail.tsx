@@ -6,7 +6,7 @@ import { TOOL_GROUPS } from "./tools";
 export function ToolRail({ active, onPick, orientation = "vertical" }: { active: ToolId; onPick: (id: ToolId) => void; orientation?: "vertical" | "horizontal" }) {
   const vertical = orientation === "vertical";
   return (
-    <div role="toolbar" aria-label="Sketch tools" aria-orientation={orientation} className={`flex ${vertical ? "flex-col" : "flex-row overflow-x-auto"} gap-1 border-rule bg-panel p-1 ${vertical ? "border-r" : "border-b"}`}>
+    <div role="toolbar" aria-label="Sketch tools" aria-orientation={orientation} className={`flex ${vertical ? "flex-col overflow-y-auto" : "flex-row overflow-x-auto"} shrink-0 gap-1 border-rule bg-panel p-1 ${vertical ? "border-r" : "border-b"}`}>
       {TOOL_GROUPS.map((group, gi) => (
         <div key={gi} className={`${vertical ? "grid grid-cols-2" : "flex flex-row"} gap-1 ${gi ? (vertical ? "border-t border-rule pt-1" : "border-l border-rule pl-1") : ""}`}>
           {group.map((t) => (

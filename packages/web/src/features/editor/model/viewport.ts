@@ -29,7 +29,9 @@ export function panBy(v: Viewport, dx: number, dy: number): Viewport {
 
 /** The view that shows `bounds` whole inside a width × height box with a margin (px). */
 export function fitBounds(bounds: Bounds | null, width: number, height: number, margin = 48): Viewport {
-  if (!bounds || width <= 0 || height <= 0) return { scale: 50, ox: width / 2 - 4 * 50, oy: height / 2 + 3 * 50 };
+  if (width <= 0 || height <= 0) return { scale: 50, ox: 0, oy: 0 };
+  // An empty plan shows a room-sized area (8 × 6 m from the origin) to start drawing in.
+  if (!bounds) return fitBounds({ minX: 0, minY: 0, maxX: 8, maxY: 6 }, width, height, margin);
   const w = Math.max(bounds.maxX - bounds.minX, 1);
   const h = Math.max(bounds.maxY - bounds.minY, 1);
   const scale = Math.min(MAX_SCALE, Math.max(MIN_SCALE, Math.min((width - 2 * margin) / w, (height - 2 * margin) / h)));

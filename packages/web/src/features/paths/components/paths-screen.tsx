@@ -49,9 +49,14 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
   const canvas = useElementSize<HTMLDivElement>();
   const frame = useFillHeight<HTMLDivElement>(560);
   const fitted = useRef(false);
+  // Until the person moves the view, it follows the canvas size (the layout settles after the first measure).
   useEffect(() => {
-    if (!fitted.current && canvas.width > 0) { fitted.current = true; setViewport(fitBounds(planBounds(store.plan, levelId), canvas.width, canvas.height)); }
+    if (!fitted.current && canvas.width > 0 && canvas.height > 0) setViewport(fitBounds(planBounds(store.plan, levelId), canvas.width, canvas.height));
   }, [canvas.width, canvas.height, store, levelId]);
+  const moveView = (update: (v: Viewport) => Viewport) => {
+    fitted.current = true;
+    setViewport(update);
+  };
 
   const request = useMemo(() => (inputs ? toRequest(version, inputs) : null), [inputs, version]);
   const analysis = useAnalysis(projectId, request);
@@ -60,7 +65,7 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
   const stale = analysis.isPlaceholderData || recomputing;
 
   const envRef = useRef<ToolEnv>({ store, levelId, unit: plan.displayUnit, gridM: 0, toleranceM: 0.2 });
-  Object.assign(envRef.current, { levelId, toleranceM: 12 / viewport.scale, pan: (d: { x: number; y: number }) => setViewport((v) => ({ ...v, ox: v.ox + d.x * v.scale, oy: v.oy - d.y * v.scale })) });
+  Object.assign(envRef.current, { levelId, toleranceM: 12 / viewport.scale, pan: (d: { x: number; y: number }) => moveView((v) => ({ ...v, ox: v.ox + d.x * v.scale, oy: v.oy - d.y * v.scale })) });
   const [tool] = useState(() => new InspectTool(envRef.current));
 
   const selected = selection[0] ?? null;
@@ -120,7 +125,7 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
               selection={selection}
               problems={[]}
               viewport={viewport}
-              setViewport={setViewport}
+              setViewport={moveView}
               width={canvas.width}
               height={canvas.height}
               tool={tool}
@@ -137,7 +142,7 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
             </div>
           </div>
         </div>
-        <aside aria-label="Results" className="flex max-h-[45%] min-h-0 flex-col gap-4 overflow-y-auto border-t border-rule p-3 lg:max-h-none lg:w-[360px] lg:border-l lg:border-t-0">
+        <aside aria-label="Results" className="flex h-[45%] min-h-0 shrink-0 flex-col gap-4 overflow-y-auto border-t border-rule p-3 lg:h-auto lg:w-[360px] lg:border-l lg:border-t-0">
           {analysis.isPending && !result ? <p role="status" className="text-sm text-muted">Working out where the sound gets through…</p> : null}
           {problems ? (
             <div role="alert" className="rounded-md border border-danger/40 bg-danger/5 p-3 text-sm">

@@ -23,7 +23,7 @@ export function SpectrumChart({ result, dimmed }: { result: AnalysisResult; dimm
   for (let d = bottom; d <= top; d += 10) ticks.push(d);
   return (
     <figure className={dimmed ? "opacity-40 transition-opacity" : "transition-opacity"}>
-      <svg viewBox={`0 0 ${W} ${H}`} className="w-full" role="img" aria-label={`Level reaching ${result.receiver.name} by frequency${nc !== null ? `, against the NC ${nc} curve` : ""}`}>
+      <svg viewBox={`0 0 ${W} ${H}`} className="w-full max-w-[380px]" role="img" aria-label={`Level reaching ${result.receiver.name} by frequency${nc !== null ? `, against the NC ${nc} curve` : ""}`}>
         {ticks.map((d) => (
           <g key={d}>
             <line x1={L} x2={W - R} y1={fy(d)} y2={fy(d)} stroke="#d9d4c7" strokeWidth={0.5} />
