@@ -1,0 +1,152 @@
+import type { Browser, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import { launchBrowser, newPage } from "../src/browser.js";
+
+const DEMO_PASSWORD = "quiet-demo-2026";
+const CLIENT = "client@fernhollow.example";
+
+interface Mail {
+  to: string[];
+  subject: string;
+  text: string;
+  links: string[];
+  receivedAt: string;
+}
+
+async function signIn(page: Page, email: string): Promise<void> {
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(DEMO_PASSWORD);
+  await page.getByRole("button", { name: "Sign in" }).click();
+}
+
+async function mails(baseUrl: string): Promise<Mail[]> {
+  const res = await fetch(`${baseUrl}/api/v1/dev/mail`);
+  return ((await res.json()) as { messages: Mail[] }).messages;
+}
+
+async function until<T>(what: string, probe: () => Promise<T | undefined>, timeoutMs = 20_000): Promise<T> {
+  const end = Date.now() + timeoutMs;
+  while (Date.now() < end) {
+    const v = await probe();
+    if (v !== undefined) return v;
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  throw new Error(`timed out waiting for ${what}`);
+}
+
+/** The planner builds a scenario on two weak links, makes a proposal from it and sends it. */
+async function plannerSends(browser: Browser, baseUrl: string, name: string, upgrades: [element: string, upgrade: string][]): Promise<void> {
+  const { context, page, errors } = await newPage(browser);
+  await page.goto(`${baseUrl}/sign-in`);
+  await signIn(page, "planner@larkspur.example");
+  await page.getByRole("link", { name: /Fernhollow Audio/ }).first().click();
+  await page.getByRole("link", { name: "Options" }).click();
+  const list = page.getByRole("list", { name: "Where the sound gets through" });
+  await list.waitFor();
+  for (const [element, upgrade] of upgrades) {
+    const select = page.getByLabel(`Add an upgrade on ${element}`);
+    const label = await select.locator("option", { hasText: upgrade }).first().textContent();
+    await select.selectOption({ label: label! });
+  }
+  await page.getByLabel("Scenario name").fill(name);
+  await page.getByRole("button", { name: "Save and evaluate" }).click();
+  const column = page.getByRole("columnheader", { name });
+  await column.waitFor();
+  const index = await page.locator("thead th").evaluateAll((ths, n) => ths.findIndex((t) => t.textContent === n), name);
+  await page.locator("tbody tr").last().locator("td").nth(index).getByRole("button", { name: "Make proposal" }).click();
+  await page.waitForURL(/\/proposal/);
+  await page.getByRole("button", { name: /Send version 1 to the client/ }).click();
+  await page.getByText(/Version 1 was sent/).waitFor();
+  expect(errors).toEqual([]);
+  await context.close();
+}
+
+describe("from a scenario to a paid deposit, in the browser", () => {
+  let browser: Browser;
+  const baseUrl = inject("baseUrl");
+  const paymentsUrl = inject("paymentsUrl");
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => browser?.close());
+
+  it("planner sends; the client opens the mailed link, approves, pays with the succeeding card; the webhook marks it paid once", async () => {
+    const sentAt = new Date().toISOString();
+    await plannerSends(browser, baseUrl, "Duct and outlets", [["Shared supply duct", "Inline duct silencer"], ["Back-to-back outlet boxes", "Outlet putty pads"]]);
+    const mail = await until("the proposal mail", async () => (await mails(baseUrl)).find((m) => m.to.includes(CLIENT) && m.receivedAt >= sentAt && /proposal/.test(m.subject)));
+    const link = mail.links.find((l) => l.includes("/portal/proposals/"))!;
+    expect(link.startsWith(baseUrl)).toBe(true);
+
+    const { context, page, errors } = await newPage(browser);
+    await page.goto(`${baseUrl}/dev/mail`);
+    await page.locator(`a[href="${link}"]`).first().click();
+    await signIn(page, CLIENT);
+    await page.waitForURL(/\/projects\/[^/]+\/proposal\?id=/);
+    await page.getByTestId("prediction").waitFor();
+    await expect(page.getByTestId("prediction").textContent()).resolves.toMatch(/^From about \d+ to about \d+ dBA in Recording room/);
+    const deposit = await page.getByTestId("deposit").textContent();
+    await page.getByRole("button", { name: "Approve version 1" }).click();
+    await page.getByRole("button", { name: /Pay the deposit/ }).click();
+
+    await page.waitForURL(`${paymentsUrl}/**`);
+    await expect(page.getByTestId("amount").textContent()).resolves.toBe(deposit);
+    await page.getByLabel("Card number").fill("4242 4242 4242 4242");
+    await page.getByLabel("Expiry (MM / YY)").fill("12 / 34");
+    await page.getByLabel("CVC").fill("123");
+    await page.getByRole("button", { name: /^Pay / }).click();
+    await page.waitForURL(/payment=done/);
+    await page.getByText("Deposit paid", { exact: true }).first().waitFor({ timeout: 20_000 });
+
+    const receipt = await until("the receipt", async () => (await mails(baseUrl)).find((m) => m.to.includes(CLIENT) && m.subject.startsWith("Receipt") && m.receivedAt >= sentAt));
+    expect(receipt.text).toContain(deposit!);
+
+    // The payment service delivers the same event again: nothing changes, no second receipt.
+    const events = (await (await fetch(`${paymentsUrl}/_fake/events`)).json()) as { events: { id: string; type: string; data: { object: { url?: string } } }[] };
+    const completed = events.events.filter((e) => e.type === "checkout.session.completed").at(-1)!;
+    const resend = await fetch(`${paymentsUrl}/_fake/events/${completed.id}/resend`, { method: "POST" });
+    expect(await resend.json()).toEqual({ status: 200 });
+    await new Promise((r) => setTimeout(r, 500));
+    const receipts = (await mails(baseUrl)).filter((m) => m.to.includes(CLIENT) && m.subject.startsWith("Receipt") && m.receivedAt >= sentAt);
+    expect(receipts).toHaveLength(1);
+    await page.reload();
+    await page.getByText("Payments").waitFor();
+    await expect(page.getByText(/— paid /).count()).resolves.toBe(1);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it("a declined card leaves the deposit unpaid and tells the client, who can try again", async () => {
+    const sentAt = new Date().toISOString();
+    await plannerSends(browser, baseUrl, "Door seals", [["Studio door", "Automatic door bottom"]]);
+    const mail = await until("the proposal mail", async () => (await mails(baseUrl)).find((m) => m.to.includes(CLIENT) && m.receivedAt >= sentAt && /proposal/.test(m.subject)));
+    const link = mail.links.find((l) => l.includes("/portal/proposals/"))!;
+    const { context, page } = await newPage(browser);
+    await page.goto(link);
+    await signIn(page, CLIENT);
+    await page.waitForURL(/\/proposal\?id=/);
+    await page.getByRole("button", { name: "Approve version 1" }).click();
+    await page.getByRole("button", { name: /Pay the deposit/ }).click();
+    await page.waitForURL(`${paymentsUrl}/**`);
+    await page.getByLabel("Card number").fill("4000 0000 0000 0002");
+    await page.getByLabel("Expiry (MM / YY)").fill("12 / 34");
+    await page.getByLabel("CVC").fill("123");
+    await page.getByRole("button", { name: /^Pay / }).click();
+    await page.getByRole("alert").getByText(/declined/).waitFor();
+    await page.goto(link);
+    await page.getByText(/The last payment did not go through/).waitFor({ timeout: 20_000 });
+    await expect(page.getByRole("button", { name: /Pay the deposit/ }).isEnabled()).resolves.toBe(true);
+    await expect(page.getByText("Deposit paid", { exact: true }).count()).resolves.toBe(0);
+    await context.close();
+  });
+
+  it("does not show one client another client's proposal", async () => {
+    const { context, page } = await newPage(browser);
+    const mail = (await mails(baseUrl)).find((m) => m.to.includes(CLIENT) && /proposal/.test(m.subject))!;
+    const link = mail.links.find((l) => l.includes("/portal/proposals/"))!;
+    await page.goto(link);
+    await signIn(page, "client@bergfamily.example");
+    await page.getByText("This proposal is not available to you").waitFor();
+    await context.close();
+  });
+});
