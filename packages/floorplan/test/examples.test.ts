@@ -25,14 +25,14 @@ describe("examples/ demo plans", () => {
   }
 });
 
-import { analysePlan } from "../src/analysis/analyse.js";
+import { solvePlan } from "../src/analysis/analyse.js";
 
 // The weakest links a practitioner would name first (reasons in docs/plan-model.md, section 7).
 describe("demo plans: weakest links", () => {
   const [fernhollowDemo, cinemaDemo] = demoPlans();
 
   it("Fernhollow: the condenser reaches the recording room over the party wall, through the shared ceiling void", () => {
-    const r = analysePlan(fernhollowDemo!.plan, constructionCatalogue, { source: { spaceId: "back", spectrumId: "machinery-hum" }, receiver: "record" });
+    const r = solvePlan(fernhollowDemo!.plan, constructionCatalogue, { source: { spaceId: "back", spectrumId: "machinery-hum" }, receiver: "record" });
     if (!r.ok) throw new Error(r.problems[0]!.message);
     expect(r.onPlan.elements[0]).toMatchObject({ kind: "ceiling", elementId: "plenum^record" });
     expect(r.result.paths[0]!.spaces).toEqual(["back", "plenum", "record"]);
@@ -42,7 +42,7 @@ describe("demo plans: weakest links", () => {
   });
 
   it("Fernhollow: tram squeal comes in through the shopfront glazing and the street door", () => {
-    const r = analysePlan(fernhollowDemo!.plan, constructionCatalogue, { source: { spaceId: "outdoors", spectrumId: "tram-wheel-squeal" }, receiver: "control" });
+    const r = solvePlan(fernhollowDemo!.plan, constructionCatalogue, { source: { spaceId: "outdoors", spectrumId: "tram-wheel-squeal" }, receiver: "control" });
     if (!r.ok) throw new Error(r.problems[0]!.message);
     expect(r.onPlan.elements.slice(0, 2).map((e) => e.elementId).sort()).toEqual(["door-street", "shopfront"]);
     expect(r.onPlan.elements[0]!.share + r.onPlan.elements[1]!.share).toBeGreaterThan(0.9);
@@ -53,7 +53,7 @@ describe("demo plans: weakest links", () => {
   });
 
   it("Fernhollow: footfall upstairs comes down through the slab into the void and the recording room's tiles", () => {
-    const r = analysePlan(fernhollowDemo!.plan, constructionCatalogue, { source: { impactOnRoomId: "dance" }, receiver: "record" });
+    const r = solvePlan(fernhollowDemo!.plan, constructionCatalogue, { source: { impactOnRoomId: "dance" }, receiver: "record" });
     if (!r.ok) throw new Error(r.problems[0]!.message);
     const path = r.onPlan.paths[0]!;
     expect(path.kind).toBe("impact");
@@ -62,7 +62,7 @@ describe("demo plans: weakest links", () => {
   });
 
   it("Cinema: the bass goes up through the joist floor with its ceiling fixed straight to the joists", () => {
-    const r = analysePlan(cinemaDemo!.plan, constructionCatalogue, { source: { spaceId: "cinema", spectrumId: "cinema-bass" }, receiver: "nursery" });
+    const r = solvePlan(cinemaDemo!.plan, constructionCatalogue, { source: { spaceId: "cinema", spectrumId: "cinema-bass" }, receiver: "nursery" });
     if (!r.ok) throw new Error(r.problems[0]!.message);
     expect(r.onPlan.elements[0]).toMatchObject({ kind: "floor", elementId: "nursery^cinema", gainExact: true });
     expect(r.onPlan.elements[0]!.share).toBeGreaterThan(0.5);

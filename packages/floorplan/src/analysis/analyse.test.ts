@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { constructionCatalogue } from "../catalogue/catalogue.js";
 import { catalogueWith, type Construction } from "../catalogue/types.js";
 import { groundLevel, planWith, rect } from "../../test/plan-fixtures.js";
-import { analysePlan } from "./analyse.js";
+import { solvePlan } from "./analyse.js";
 
 const flat = (id: string, category: Construction["category"], tl: number): Construction => ({
   id, name: `${tl} dB everywhere`, category, thicknessMm: 100, surfaceDensityKgM2: 100, tlDb: new Array(21).fill(tl), source: { kind: "typical", note: "test construction" },
@@ -21,9 +21,9 @@ function twoRooms(wallId: string, extra: Parameters<typeof planWith>[0] = []) {
 }
 const source = { spaceId: "A", levelsDb: new Array(21).fill(90) };
 
-describe("analysePlan against hand calculations", () => {
+describe("solvePlan against hand calculations", () => {
   it("gives L2 = L1 − TL + 10·lg(S/A2) for one wall between two rooms", () => {
-    const r = analysePlan(twoRooms("test-wall-45"), catalogue, { source, receiver: "B", flanking: false });
+    const r = solvePlan(twoRooms("test-wall-45"), catalogue, { source, receiver: "B", flanking: false });
     if (!r.ok) throw new Error(r.problems[0]!.message);
     // engine-notes.md [derived]: L1 90, TL 45, S 10 m², A2 20 m² → L2 = 42.0 dB (41.99) in every band.
     for (const l of r.result.levelsDb) {
@@ -34,7 +34,7 @@ describe("analysePlan against hand calculations", () => {
 
   it("matches the composite formula for a door with an undercut", () => {
     const door = { type: "door" as const, id: "D", wallRef: "A:Ab", offsetM: 1.5, widthM: 1.0, heightM: 2.0, constructionId: "test-door-20", leaks: { undercutMm: 10, perimeterGapMm: 0, sealsCracked: false } };
-    const r = analysePlan(twoRooms("test-wall-50", [door]), catalogue, { source, receiver: "B", flanking: false });
+    const r = solvePlan(twoRooms("test-wall-50", [door]), catalogue, { source, receiver: "B", flanking: false });
     if (!r.ok) throw new Error(r.problems[0]!.message);
     // Composite TLc = −10·lg(Σ τi·Si / S) (engine-notes.md [pub]): wall 8 m² at 50 dB, leaf
     // 1.99 m² at 20 dB, undercut 1.0 m × 10 mm = 0.01 m² open (τ = 1), S = 10 m².
@@ -43,7 +43,7 @@ describe("analysePlan against hand calculations", () => {
     expect(tlc).toBeCloseTo(25.23, 2);
     for (const l of r.result.levelsDb) expect(l).toBeCloseTo(90 - tlc + 10 * Math.log10(10 / 20), 6);
     // Without the undercut the same door gives the 27.0 dB of the textbook check (10 m² at 50 dB with 2 m² at 20 dB).
-    const sealed = analysePlan(twoRooms("test-wall-50", [{ ...door, leaks: undefined }]), catalogue, { source, receiver: "B", flanking: false });
+    const sealed = solvePlan(twoRooms("test-wall-50", [{ ...door, leaks: undefined }]), catalogue, { source, receiver: "B", flanking: false });
     if (!sealed.ok) throw new Error("sealed");
     expect(90 - sealed.result.levelsDb[10]! + 10 * Math.log10(10 / 20)).toBeCloseTo(27.0, 1);
     // The door (leaf and gap) carries most of the sound, the wall around it little.
@@ -55,9 +55,9 @@ describe("analysePlan against hand calculations", () => {
 
   it("uses the receiving room's target and reports a missing receiver", () => {
     const plan = twoRooms("test-wall-45");
-    const bad = analysePlan(plan, catalogue, { source, receiver: "nowhere" });
+    const bad = solvePlan(plan, catalogue, { source, receiver: "nowhere" });
     expect(!bad.ok && bad.problems[0]!.message).toContain("nowhere");
-    const withTarget = analysePlan(plan, catalogue, { source, receiver: "B", target: { kind: "dba", dba: 30 }, flanking: false });
+    const withTarget = solvePlan(plan, catalogue, { source, receiver: "B", target: { kind: "dba", dba: 30 }, flanking: false });
     if (!withTarget.ok) throw new Error("target");
     expect(withTarget.result.shortfall?.met).toBe(false);
   });

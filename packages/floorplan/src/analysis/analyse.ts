@@ -10,7 +10,7 @@ import type { PlanResult } from "../result/types.js";
 import type { Problem } from "../validation/problem.js";
 
 /** What to analyse: a source (a space with a library or given spectrum, or impact on a room's floor) and a receiving room. */
-export interface AnalysisRequest {
+export interface SolvePlanRequest {
   source: { spaceId: string; spectrumId: string } | { spaceId: string; levelsDb: number[] } | { impactOnRoomId: string; lnOffsetDb?: number };
   receiver: string;
   /** Paths to rank (default 10). */
@@ -22,14 +22,14 @@ export interface AnalysisRequest {
   exactPartGains?: number;
 }
 
-export type AnalysisResult =
+export type SolvePlanResult =
   | { ok: true; result: SolveResult; onPlan: PlanResult; assumptions: Problem[]; built: Extract<BuildResult, { ok: true }> }
   | { ok: false; problems: Problem[] };
 
-/** The engine's form of a room target (dB(A) level, NC, or reduction in dB). */
-export function engineTarget(target: Target): EngineTarget {
+/** The engine's form of a room target (dB(A) level, NC clamped to the rated NC-15…70, or reduction in dB). */
+function toEngineTarget(target: Target): EngineTarget {
   if (target.kind === "dba") return { kind: "level", dba: target.dba };
-  if (target.kind === "nc") return { kind: "nc", nc: target.nc };
+  if (target.kind === "nc") return { kind: "nc", nc: Math.min(70, Math.max(15, target.nc)) };
   return { kind: "reduction", db: target.reductionDb };
 }
 
@@ -37,8 +37,8 @@ function requestProblem(elementId: string, message: string, suggestion: string):
   return { code: "analysis-request", severity: "error", elementId, message, suggestion };
 }
 
-/** Builds, solves and maps back one analysis of a plan (levels in dB, shares 0–1, gains in dB(A)). */
-export function analysePlan(plan: Plan, catalogue: Catalogue, request: AnalysisRequest): AnalysisResult {
+/** Builds, solves and maps back one analysis of a plan, with exact gains for the strongest wall parts (levels in dB, shares 0–1, gains in dB(A)). */
+export function solvePlan(plan: Plan, catalogue: Catalogue, request: SolvePlanRequest): SolvePlanResult {
   const rx = plan.elements[request.receiver];
   if (!rx || (rx.type !== "room" && rx.type !== "void" && rx.type !== "neighbour")) {
     return { ok: false, problems: [requestProblem(request.receiver, `There is no room called “${request.receiver}” to listen in.`, "Pick the receiving room on the plan.")] };
@@ -60,7 +60,7 @@ export function analysePlan(plan: Plan, catalogue: Catalogue, request: AnalysisR
   const parsed = parseNetwork(built.network);
   if (!parsed.ok) throw new Error(`builder produced an invalid network: ${parsed.issues.slice(0, 3).map((i) => `${i.path} ${i.message}`).join("; ")}`);
   const target = request.target ?? (rx.type === "room" ? rx.target : undefined);
-  const result = solveNetwork(parsed.value, { receiver: request.receiver, k: request.k ?? 10, ...(target ? { target: engineTarget(target) } : {}) });
+  const result = solveNetwork(parsed.value, { receiver: request.receiver, k: request.k ?? 10, ...(target ? { target: toEngineTarget(target) } : {}) });
   const onPlan = mapResultToPlan(plan, built, result);
   const estimated = onPlan.elements.filter((e) => !e.gainExact && e.kind !== "flanking" && e.share > 0).slice(0, request.exactPartGains ?? 5);
   const exact = exactPartGainsDb(parsed.value, { receiver: request.receiver }, estimated.map((e) => ({ elementId: e.elementId, linkId: e.linkIds[0]! })));
