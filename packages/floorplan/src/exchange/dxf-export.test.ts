@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { cinemaUnderNurseryPlan } from "../demo/cinema-under-nursery.js";
 import { fernhollowStudioPlan } from "../demo/fernhollow-studio.js";
+import { generateSyntheticBuilding } from "../synthetic/generate.js";
 import { elementsOfType } from "../document/elements.js";
 import type { Opening, Plan, Point } from "../document/schema.js";
 import { openingPlacement } from "../geometry/openings.js";
@@ -38,7 +39,14 @@ const sameSpan = (a: [Point, Point], b: [Point, Point]) =>
   Math.max(Math.hypot(a[0].x - b[1].x, a[0].y - b[1].y), Math.hypot(a[1].x - b[0].x, a[1].y - b[0].y)) <= MM;
 
 describe("DXF export", () => {
-  for (const [label, make, levelId] of [["Fernhollow ground floor", fernhollowStudioPlan, "ground"], ["cinema basement", cinemaUnderNurseryPlan, "basement"]] as const) {
+  const synthetic = generateSyntheticBuilding({ rooms: 40, levels: 2, seed: 11 });
+  const syntheticLevel = elementsOfType(synthetic, "level")[0]!.id;
+  const cases: Array<[string, () => Plan, string]> = [
+    ["Fernhollow ground floor", fernhollowStudioPlan, "ground"],
+    ["cinema basement", cinemaUnderNurseryPlan, "basement"],
+    ["a synthetic 40-room building", () => synthetic, syntheticLevel],
+  ];
+  for (const [label, make, levelId] of cases) {
     it(`${label}: export then import gives the same rooms, doors and windows within 1 mm`, () => {
       const plan = make();
       const text = planToDxf(plan, { levelId });
