@@ -1,0 +1,32 @@
+import { usePlan } from "../../projects/api/get-plan";
+
+export interface PlanPlaces {
+  rooms: { id: string; name: string; centre: { x: number; y: number } | null }[];
+  elements: { id: string; label: string }[];
+  nameOf: (id: string | null) => string | null;
+}
+
+interface LooseElement {
+  id?: string;
+  type?: string;
+  name?: string;
+  outline?: { x: number; y: number }[];
+}
+
+const NOT_ELEMENTS = new Set(["level", "room", "note", "tape", "pin"]);
+
+/** Rooms and elements of the project's current plan, to pin measurements and photos to. */
+export function usePlanPlaces(projectId: string): PlanPlaces {
+  const plan = usePlan(projectId);
+  const elements = Object.entries(((plan.data?.document as { elements?: Record<string, LooseElement> } | undefined)?.elements ?? {}));
+  const rooms = elements
+    .filter(([, e]) => e.type === "room")
+    .map(([id, e]) => {
+      const pts = e.outline ?? [];
+      const centre = pts.length ? { x: pts.reduce((s, p) => s + p.x, 0) / pts.length, y: pts.reduce((s, p) => s + p.y, 0) / pts.length } : null;
+      return { id, name: e.name || id, centre };
+    });
+  const others = elements.filter(([, e]) => e.type && !NOT_ELEMENTS.has(e.type)).map(([id, e]) => ({ id, label: `${e.name || id} (${e.type})` }));
+  const names = new Map<string, string>([...rooms.map((r) => [r.id, r.name] as const), ...others.map((o) => [o.id, o.label] as const)]);
+  return { rooms, elements: others, nameOf: (id) => (id ? (names.get(id) ?? id) : null) };
+}
