@@ -1,6 +1,6 @@
 import { Circle, Group, Label, Line, Rect, Tag, Text } from "react-konva";
 import type { Plan, Point, Problem } from "@hushmark/floorplan";
-import { elementBounds, type ToolOverlay } from "@hushmark/editor-core";
+import { elementBounds, formatLength, type ToolOverlay } from "@hushmark/editor-core";
 import { wallBands, openingSpan } from "../model/wall-geometry";
 import { toScreen, type Viewport } from "../model/viewport";
 import { brand, danger, focus, ink, panel } from "./colours";
@@ -8,6 +8,7 @@ import { brand, danger, focus, ink, panel } from "./colours";
 const flatScreen = (v: Viewport, pts: readonly Point[]) => pts.flatMap((p) => { const s = toScreen(v, p.x, p.y); return [s.x, s.y]; });
 
 function Selected({ plan, id, v }: { plan: Plan; id: string; v: Viewport }) {
+  const unit = plan.displayUnit;
   const el = plan.elements[id];
   if (!el) {
     const band = wallBands(plan).find((b) => b.id === id);
@@ -18,6 +19,19 @@ function Selected({ plan, id, v }: { plan: Plan; id: string; v: Viewport }) {
     return (
       <Group>
         <Line points={flatScreen(v, el.outline)} closed stroke={brand} strokeWidth={2.5} />
+        {el.outline.map((a, i) => {
+          // Each wall's length on the selected room, just outside its edge.
+          const b = el.outline[(i + 1) % el.outline.length]!;
+          const lengthM = Math.hypot(b.x - a.x, b.y - a.y);
+          const sa = toScreen(v, a.x, a.y), sb = toScreen(v, b.x, b.y);
+          if (Math.hypot(sb.x - sa.x, sb.y - sa.y) < 60) return null;
+          return (
+            <Label key={`d-${a.id}`} x={(sa.x + sb.x) / 2} y={(sa.y + sb.y) / 2}>
+              <Tag fill={panel} stroke={brand} strokeWidth={1} cornerRadius={3} />
+              <Text text={formatLength(lengthM, unit)} fontFamily="Work Sans" fontSize={11} fill={ink} padding={3} />
+            </Label>
+          );
+        })}
         {el.outline.map((p) => { const s = toScreen(v, p.x, p.y); return <Rect key={p.id} x={s.x - 5} y={s.y - 5} width={10} height={10} fill={panel} stroke={brand} strokeWidth={2} />; })}
       </Group>
     );

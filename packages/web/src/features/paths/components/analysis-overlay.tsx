@@ -6,6 +6,7 @@ import { levelOf } from "@hushmark/editor-core";
 import { openingSpan, wallBands } from "../../editor/model/wall-geometry";
 import { toScreen, type Viewport } from "../../editor/model/viewport";
 import { shareColour } from "../model/share-scale";
+import { overlayTarget } from "../model/overlay-target";
 import { ink, panel } from "../../editor/canvas/colours";
 
 type Elements = AnalysisResult["elements"];
@@ -25,7 +26,9 @@ export const ShareOverlay = memo(function ShareOverlay({ plan, levelId, elements
     <Group listening={false} opacity={dimmed ? 0.35 : 1}>
       {[...elements].sort((a, b) => Number(b.elementId.includes("^")) - Number(a.elementId.includes("^"))).map((r) => {
         const colour = shareColour(r.share);
-        const band = bands.get(r.elementId);
+        const target = overlayTarget(plan, r.elementId);
+        if (!target) return null;
+        const band = target === "wall" ? bands.get(r.elementId) : undefined;
         if (band) {
           if (band.levelId !== levelId) return null;
           return <Line key={r.elementId} points={bandOutline(band.start, band.end, Math.max(band.thicknessM, minW) / 2)} closed fill={colour} stroke={ink} strokeWidth={1} strokeScaleEnabled={false} />;
