@@ -124,7 +124,20 @@ export function dxfConverter(options: DxfImportOptions, units: Extract<DxfUnits,
     return read;
   }
 
+  /** Moves everything so the drawing's lower-left corner sits at the plan origin (whole metres). */
+  function shiftedToOrigin(): Point {
+    let minX = Infinity, minY = Infinity;
+    for (const list of Object.values(byRole)) for (const p of list) for (const q of p.points) { minX = Math.min(minX, q.x); minY = Math.min(minY, q.y); }
+    if (!Number.isFinite(minX)) return { x: 0, y: 0 };
+    // Whole metres keep the shifted coordinates as readable as the drawing's own.
+    const shift = { x: Math.floor(minX), y: Math.floor(minY) };
+    for (const list of Object.values(byRole)) for (const p of list) p.points = p.points.map((q) => ({ x: q.x - shift.x, y: q.y - shift.y }));
+    for (const l of labels) l.at = { x: l.at.x - shift.x, y: l.at.y - shift.y };
+    return shift;
+  }
+
   function finish(): DxfImport {
+    const shiftM = o.moveToOrigin ? shiftedToOrigin() : { x: 0, y: 0 };
     const candidates: TracedPath[] = byRole.walls.filter((p) => p.closed);
     const open = byRole.walls.filter((p) => !p.closed);
     // Open wall lines enclose rooms as the faces of their network (split where lines cross or end
@@ -232,6 +245,7 @@ export function dxfConverter(options: DxfImportOptions, units: Extract<DxfUnits,
       report: {
         units,
         chordToleranceM: o.chordToleranceM,
+        shiftM,
         entitiesRead: read,
         converted: { rooms: rooms.length, doors: doors.openings.length, windows: windows.openings.length, underlayPaths: underlayPaths.length, roomNames: usedLabels.size },
         byType,

@@ -32,6 +32,8 @@ export interface DxfImportOptions {
   roomUse?: RoomUse;
   door?: { heightM: number; constructionId: string };
   window?: { heightM: number; sillM: number; constructionId: string };
+  /** Move the drawing so its lower-left corner (whole metres) is at the plan origin, for drawings in site coordinates. */
+  moveToOrigin?: boolean;
   /** Block definitions for expanding INSERTs (`importDxf` passes the file's own). */
   blocks?: Record<string, DxfBlock>;
 }
@@ -56,6 +58,8 @@ export interface DxfReportLine {
 export interface DxfImportReport {
   units: DxfUnits;
   chordToleranceM: number;
+  /** How far the drawing was moved to bring it to the plan origin (drawing point − shift = plan point), m. */
+  shiftM: { x: number; y: number };
   entitiesRead: number;
   converted: { rooms: number; doors: number; windows: number; underlayPaths: number; roomNames: number };
   byType: Record<string, { read: number; used: number; skipped: number }>;

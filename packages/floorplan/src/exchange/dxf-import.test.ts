@@ -228,6 +228,17 @@ describe("DXF import: units and damaged files", () => {
     expect(r.ok && r.imported.rooms.map((room) => room.name).sort()).toEqual(["Booth", "Lobby", "Store", "Studio"]);
   });
 
+  it("moves a drawing in site coordinates to the plan origin when asked, and says by how much", () => {
+    const far = importDxf(FLAT, { ...roles, units: "metres", moveToOrigin: true });
+    if (!far.ok) throw new Error(far.problem.message);
+    // Read as metres the drawing spans thousands of metres; its lower-left corner lands at the origin.
+    expect(far.imported.report.shiftM).toEqual({ x: -50, y: -3000 });
+    const xs = far.imported.rooms.flatMap((r) => r.outline.map((v) => v.x));
+    expect(Math.min(...xs)).toBeGreaterThanOrEqual(0);
+    const plain = importDxf(FLAT, roles);
+    expect(plain.ok && plain.imported.report.shiftM).toEqual({ x: 0, y: 0 });
+  });
+
   it("lists the layers with their entity counts for the mapping dialog", () => {
     const survey = dxfSurvey(flatDxf());
     if (!survey.ok) throw new Error(survey.problem.message);

@@ -38,6 +38,7 @@ export function DxfImportDialog({ open, onClose, plan, levelId, onCommand, runne
   const [roles, setRoles] = useState<Record<string, DxfLayerRole>>({});
   const [units, setUnits] = useState<DxfUnitChoice | "">("");
   const [toleranceMm, setToleranceMm] = useState(10);
+  const [toOrigin, setToOrigin] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
   const level = plan.elements[levelId];
   const close = () => { setStep({ kind: "pick" }); setProblem(null); setFile(null); onClose(); };
@@ -60,7 +61,7 @@ export function DxfImportDialog({ open, onClose, plan, levelId, onCommand, runne
     setStep({ kind: "converting", done: 0, total: survey.entityCount });
     try {
       const result = await runner.convert(file, {
-        levelId, layerRoles: roles, chordToleranceM: toleranceMm / 1000, ...(units ? { units } : {}),
+        levelId, layerRoles: roles, chordToleranceM: toleranceMm / 1000, moveToOrigin: toOrigin, ...(units ? { units } : {}),
       }, (done, total) => setStep({ kind: "converting", done, total }));
       if (!result.ok) { setProblem(result.problem.message); setStep({ kind: "map", survey }); return; }
       setStep({ kind: "report", imported: result.imported });
@@ -117,6 +118,10 @@ export function DxfImportDialog({ open, onClose, plan, levelId, onCommand, runne
             Arcs to within
             <input type="number" min={0.5} max={100} step={0.5} value={toleranceMm} onChange={(e) => setToleranceMm(Number(e.target.value) || 10)} className="w-20 rounded border border-rule px-2" aria-label="Arc tolerance in millimetres" />
             mm
+          </label>
+          <label className="flex items-center gap-2 text-sm">
+            <input type="checkbox" checked={toOrigin} onChange={(e) => setToOrigin(e.target.checked)} className="h-4 w-4 accent-brand" />
+            Move the drawing to the plan origin (for drawings in site coordinates)
           </label>
           <div className="flex justify-end gap-2">
             <Button variant="secondary" onClick={close}>Cancel</Button>

@@ -12,6 +12,7 @@ export function DxfReportView({ report }: { report: DxfImportReport }) {
         <strong>{plural(c.rooms, "room")}</strong>, {plural(c.doors, "door")}, {plural(c.windows, "window")} from {plural(report.entitiesRead, "entity", "entities")}
         {units ? `, drawn in ${units}` : ""}; arcs within {report.chordToleranceM * 1000} mm.
       </p>
+      {report.shiftM.x !== 0 || report.shiftM.y !== 0 ? <p>Moved by {-report.shiftM.x} m east and {-report.shiftM.y} m north to the plan origin.</p> : null}
       {c.underlayPaths > 0 ? <p>{plural(c.underlayPaths, "other line")} kept as underlay to trace; the editor does not show underlays yet, so they are not added to the plan.</p> : null}
       {report.toUnderlay.length > 0 ? (
         <div>
