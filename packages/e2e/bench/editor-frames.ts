@@ -89,16 +89,28 @@ try {
   await page.mouse.up();
   const drag = await stopRecording(page);
   await page.waitForTimeout(1500);
+  // The gesture must have done its job, or its frame times mean nothing.
+  await page.locator("[data-testid=save-state][data-state=saved]").waitFor({ timeout: 20_000 });
+  const savedPlan = (await (await page.request.get(`${stack.baseUrl}/api/v1/projects/${projectId}/plan`)).json()) as { document: { elements: Record<string, Room> } };
+  const movedBy = savedPlan.document.elements[target.r.id]!.outline[0]!.x - target.r.outline[0]!.x;
+  if (!(movedBy > 0.5)) throw new Error(`the dragged room did not move (moved ${movedBy} m)`);
 
   // Pan with two-finger scroll steps, then zoom with wheel steps, around the middle.
   await page.getByRole("button", { name: "Select", exact: true }).click();
   await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+  const view = async () => ({ ox: Number(await canvas.getAttribute("data-ox")), oy: Number(await canvas.getAttribute("data-oy")), scale: Number(await canvas.getAttribute("data-scale")) });
+  const beforePan = await view();
   await startRecording(page);
-  for (let i = 0; i < 120; i++) await page.mouse.wheel(i % 40 < 20 ? 12 : -12, 6);
+  for (let i = 0; i < 120; i++) await page.mouse.wheel(i < 60 ? 12 : -6, 6);
   const pan = await stopRecording(page);
+  const afterPan = await view();
+  if (afterPan.ox === beforePan.ox && afterPan.oy === beforePan.oy) throw new Error("the view did not pan");
   await startRecording(page);
-  for (let i = 0; i < 60; i++) await page.mouse.wheel(0, i % 20 < 10 ? -100 : 100);
+  for (let i = 0; i < 30; i++) await page.mouse.wheel(0, -100);
+  const zoomedIn = await view();
+  for (let i = 0; i < 30; i++) await page.mouse.wheel(0, 100);
   const zoom = await stopRecording(page);
+  if (!(zoomedIn.scale > afterPan.scale)) throw new Error("the view did not zoom");
 
   // Typing in the side panel: keystroke to next frame.
   await page.getByRole("tab", { name: "Elements" }).click();
