@@ -251,6 +251,24 @@ describe("brief, measurements, recordings and photos", () => {
     expect((await owner.get(`/api/v1/projects/${projectId}/photos`)).body.photos).toHaveLength(1);
   });
 
+  it("deletes a measurement with its recording and its photos' files", async () => {
+    const rec = await upload(surveyor, projectId, toneWav({ seconds: 2, rate: 8000, channels: 1, depth: "16" }), "short.wav");
+    await waitReady(surveyor, projectId, rec.body.id);
+    const jpeg = await sharp({ create: { width: 64, height: 48, channels: 3, background: "#1d2433" } }).jpeg().toBuffer();
+    const photo = await surveyor.post(`/api/v1/projects/${projectId}/photos`).set("x-hushmark-upload", "1").field("measurementId", rec.body.id).attach("file", jpeg, "vent.jpg");
+    expect(photo.status).toBe(201);
+    const owned = async () => (await h.dataSource.query(
+      "SELECT count(*)::int AS n FROM stored_files WHERE id IN (SELECT file_id FROM measurements WHERE id = $1) OR id IN (SELECT file_id FROM photos WHERE measurement_id = $1) OR id IN (SELECT thumbnail_file_id FROM photos WHERE measurement_id = $1)",
+      [rec.body.id],
+    ))[0].n as number;
+    expect(await owned()).toBe(3);
+    const before = (await h.dataSource.query("SELECT count(*)::int AS n FROM stored_files WHERE project_id = $1", [projectId]))[0].n as number;
+    expect((await surveyor.delete(`/api/v1/projects/${projectId}/measurements/${rec.body.id}`)).status).toBe(204);
+    const after = (await h.dataSource.query("SELECT count(*)::int AS n FROM stored_files WHERE project_id = $1", [projectId]))[0].n as number;
+    expect(before - after).toBe(3);
+    expect((await owner.get(`/api/v1/projects/${projectId}/photos/${photo.body.id}/image`)).status).toBe(404);
+  });
+
   it("hides another firm's measurements (404)", async () => {
     const other = (await newFirm(h, "Other Firm")).agent;
     const m = (await surveyor.get(`/api/v1/projects/${projectId}/measurements`)).body.measurements[0];

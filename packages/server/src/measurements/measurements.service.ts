@@ -15,6 +15,7 @@ import type { JobQueue } from "../jobs/job-queue.js";
 import type { ProjectsService } from "../projects/projects.service.js";
 import { Measurement } from "./measurement.entity.js";
 import { measurementDetailDto, measurementDto } from "./measurement-dto.js";
+import { Photo } from "./photo.entity.js";
 import { RECORDING_QUEUE, storedWavFormat, type RecordingJobData } from "./recording-job.js";
 
 const LIST_COLUMNS = ["id", "projectId", "label", "kind", "source", "status", "progress", "error", "takenAt", "roomId", "point", "device", "calibrationDb", "leqDb", "lmaxDb", "l10Db", "l90Db", "summary", "events", "fileId", "createdAt"] as const;
@@ -86,12 +87,19 @@ export function createMeasurementsService(dataSource: DataSource, projects: Proj
 
   async function remove(actor: Actor, projectId: string, id: string): Promise<void> {
     const m = await find(actor, projectId, id);
+    // The measurement's recording and its photos' files go with it; objects are removed after the commit.
     const afterCommit = await dataSource.transaction(async (manager) => {
+      const photos = await manager.getRepository(Photo).find({ where: { measurementId: m.id }, relations: { file: true, thumbnailFile: true } });
       await manager.getRepository(Measurement).delete({ id: m.id });
-      const file = m.fileId ? await manager.getRepository(StoredFile).findOneBy({ id: m.fileId }) : null;
-      return file ? files.remove(manager, file) : null;
+      const doomed = [
+        ...(m.fileId ? [await manager.getRepository(StoredFile).findOneBy({ id: m.fileId })] : []),
+        ...photos.flatMap((p) => [p.file, p.thumbnailFile]),
+      ].filter((f): f is StoredFile => Boolean(f));
+      const cleanups: (() => Promise<void>)[] = [];
+      for (const f of doomed) cleanups.push(await files.remove(manager, f));
+      return cleanups;
     });
-    await afterCommit?.();
+    for (const cleanup of afterCommit) await cleanup();
     await recordAudit(dataSource, { organizationId: actor.organizationId, actorUserId: actor.userId, action: "measurement.deleted", entityType: "measurement", entityId: id, data: { projectId } });
   }
 
