@@ -40,6 +40,14 @@ describe("useAutosave", () => {
     expect(saveStateText(result.current.state)).toMatch(/^All changes saved at/);
   });
 
+  it("saves a waiting change when the screen closes", async () => {
+    const saved: string[] = [];
+    const { result, unmount } = renderHook(() => useAutosave<string>({ version: 2, delayMs: 60_000, validate: async () => "last words", save: async (v, base) => (saved.push(`${v}@${base}`), base + 1) }));
+    act(() => result.current.changed());
+    unmount();
+    await waitFor(() => expect(saved).toEqual(["last words@2"]));
+  });
+
   it("does not send an invalid form, and stops on a conflict", async () => {
     let valid = false;
     let calls = 0;

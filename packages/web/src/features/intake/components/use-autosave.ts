@@ -54,12 +54,22 @@ export function useAutosave<T>(options: { version: number; delayMs?: number; val
   const changed = useCallback(() => {
     setState((s) => (s.kind === "conflict" ? s : { kind: "pending" }));
     if (timer.current) clearTimeout(timer.current);
-    timer.current = setTimeout(() => void run(), latest.current.delayMs ?? 700);
+    timer.current = setTimeout(() => {
+      timer.current = null;
+      void run();
+    }, latest.current.delayMs ?? 700);
   }, [run]);
 
-  useEffect(() => () => {
-    if (timer.current) clearTimeout(timer.current);
-  }, []);
+  // Leaving the screen with a change still waiting saves it rather than dropping it.
+  useEffect(
+    () => () => {
+      if (!timer.current) return;
+      clearTimeout(timer.current);
+      timer.current = null;
+      void run();
+    },
+    [run],
+  );
 
   return { state, changed, saveNow: run };
 }
