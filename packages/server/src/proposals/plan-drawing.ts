@@ -58,15 +58,20 @@ export function drawPlan(doc: Doc, prepared: Prepared, receiverId: string, share
   const at = (p: { x: number; y: number }): [number, number] => [ox + (p.x - minX) * scale, oy + (maxY - p.y) * scale];
 
   doc.save();
+  // A floor or ceiling element is named `upper^lower`: tint each room by the strongest one it has.
+  const layerShare = (roomId: string) => Math.max(0, ...[...shares].filter(([id]) => id.split("^").includes(roomId)).map(([, v]) => v));
   for (const room of here) {
     const pts = room.outline.map(at);
-    doc.polygon(...pts).fillAndStroke(room.id === receiverId ? "#eef6f5" : "#f7f5f0", "#d9d4c7");
+    const share = layerShare(room.id);
+    doc.polygon(...pts).fillAndStroke(share >= 0.02 ? shareColour(share) : room.id === receiverId ? "#eef6f5" : "#f7f5f0", "#d9d4c7");
   }
   for (const t of traces) {
     const [a, b] = t.polyline;
     if (!a || !b) continue;
     const piece = t.refs[0] ?? "";
-    doc.moveTo(...at(a)).lineTo(...at(b)).lineWidth(Math.max(2.5, 0.12 * scale)).strokeColor(shareColour(shares.get(piece) ?? 0)).stroke();
+    const share = shares.get(piece) ?? 0;
+    // Walls carrying little stay ink-coloured, as on the plan; the rest take their share's colour.
+    doc.moveTo(...at(a)).lineTo(...at(b)).lineWidth(Math.max(2.5, 0.12 * scale)).strokeColor(share >= 0.02 ? shareColour(share) : "#1d2433").stroke();
   }
   for (const t of traces) {
     for (const [id, p] of Object.entries(t.points ?? {})) {
@@ -78,7 +83,9 @@ export function drawPlan(doc: Doc, prepared: Prepared, receiverId: string, share
   doc.fillColor("#1d2433").fontSize(7);
   for (const room of here) {
     const [x, y] = at(polygonCentroid(room.outline));
-    doc.text(room.name, x - 50, y - 4, { width: 100, align: "center" });
+    const share = layerShare(room.id);
+    doc.fillColor(share >= 0.3 ? "#ffffff" : "#1d2433").text(room.name, x - 50, y - 4, { width: 100, align: "center" });
+    if (share >= 0.02) doc.fontSize(6).text(`floor/ceiling ${Math.round(share * 100)}%`, x - 50, y + 5, { width: 100, align: "center" }).fontSize(7);
   }
   for (const [elementId, n] of markers) {
     const p = markerPoint(prepared, elementId);
@@ -94,6 +101,7 @@ function markerPoint(prepared: Prepared, elementId: string): { x: number; y: num
   for (const t of Object.values(prepared.built.links)) {
     const p = t.points?.[elementId];
     if (p) return p;
+    if (t.kind === "vent" && t.refs.includes(elementId) && t.polyline[0]) return t.polyline[0];
     if (t.refs[0] === elementId && t.polyline.length > 0) {
       const a = t.polyline[0]!, b = t.polyline[t.polyline.length - 1]!;
       return { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };

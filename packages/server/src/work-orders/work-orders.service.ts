@@ -87,13 +87,13 @@ export function createWorkOrdersService(dataSource: DataSource, deps: { projects
     const t = ev.target;
     const met = t ? (t.kind === "nc" ? after.nc <= t.value : t.kind === "dba" ? after.dba <= t.value : measuredGain >= t.value) : null;
     const diff = round1(measuredGain - predictedGain);
-    const closeness = Math.abs(diff) <= 3 ? "close to the prediction" : diff > 0 ? `${diff} dB better than predicted` : `${-diff} dB short of the prediction`;
+    const closeness = Math.abs(diff) <= 3 ? "close to the predicted" : diff > 0 ? `${diff} dB better than the predicted` : `${-diff} dB short of the predicted`;
     return {
       id: r.id, proposalId: r.proposalId, before, after,
       predicted: { beforeDba: round1(ev.before.dba), afterDba: round1(ev.after.dba) },
       measuredGainDb: measuredGain, predictedGainDb: predictedGain,
       target: t && met !== null ? { kind: t.kind, value: t.value, met } : null,
-      summary: `Measured in ${ev.receiver.name}: from ${before.dba} to ${after.dba} dBA (${measuredGain} dB quieter), ${closeness} of ${predictedGain} dB.${t ? (met ? " The target is met." : " The target is not met yet.") : ""}`,
+      summary: `Measured in ${ev.receiver.name}: from ${before.dba} to ${after.dba} dBA (${measuredGain} dB quieter), ${closeness} drop of ${predictedGain} dB.${t ? (met ? " The target is met." : " The target is not met yet.") : ""}`,
       note: r.note,
       createdAt: r.createdAt.toISOString(),
     };

@@ -5,8 +5,10 @@ import type { z } from "zod";
  * A table cell that edits in place: Enter or leaving the field saves, Escape puts the old value
  * back; the value is checked with the same schema the server uses before anything is sent.
  */
-export function EditableCell<T>({ value, schema, parse, format, label, editable, onSave }: {
+export function EditableCell<T>({ value, schema, parse, format, display = format, label, editable, onSave }: {
   value: T;
+  /** How the value reads when not being edited (default: as edited). */
+  display?: (v: T) => string;
   schema: z.ZodType<T>;
   parse: (text: string) => unknown;
   format: (v: T) => string;
@@ -25,11 +27,11 @@ export function EditableCell<T>({ value, schema, parse, format, label, editable,
   useEffect(() => {
     if (editing) input.current?.select();
   }, [editing]);
-  if (!editable) return <span>{format(value)}</span>;
+  if (!editable) return <span>{display(value)}</span>;
   if (!editing) {
     return (
       <button type="button" className="min-h-9 w-full rounded px-1 text-left hover:bg-brand-soft focus-visible:bg-brand-soft" onClick={() => setEditing(true)} aria-label={`${label}: ${format(value)}. Edit`}>
-        {format(value) || <span className="text-muted">—</span>}
+        {display(value) || <span className="text-muted">—</span>}
       </button>
     );
   }

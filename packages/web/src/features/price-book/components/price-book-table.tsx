@@ -42,7 +42,7 @@ export function PriceBookTable({ items, currency, editable }: { items: PriceBook
       id: key,
       header,
       cell: (c) => (
-        <EditableCell value={c.getValue()} schema={costShape[key] as unknown as z.ZodType<number>} parse={num} format={(v) => (v ? String(v) : "0")} label={`${header} of ${c.row.original.name}`} editable={editable}
+        <EditableCell value={c.getValue()} schema={costShape[key] as unknown as z.ZodType<number>} parse={num} format={String} display={(v) => (v ? String(v) : "")} label={`${header} of ${c.row.original.name}`} editable={editable}
           onSave={(v) => save(c.row.original.id, { costs: { ...c.row.original.costs, [key]: v } })} />
       ),
       meta: { numeric: true },
@@ -103,7 +103,7 @@ export function PriceBookTable({ items, currency, editable }: { items: PriceBook
         <p className="text-sm text-muted">{table.getRowModel().rows.length} of {items.length} · prices in {currency}{editable ? " · click a value to change it" : ""}</p>
       </div>
       <div className="overflow-x-auto rounded-lg border border-rule bg-panel">
-        <table className="w-full min-w-[1100px] text-sm tabular-nums">
+        <table className="w-full min-w-[1280px] text-sm tabular-nums">
           <thead>
             {table.getHeaderGroups().map((g) => (
               <tr key={g.id} className="border-b border-rule text-left">
@@ -123,7 +123,7 @@ export function PriceBookTable({ items, currency, editable }: { items: PriceBook
           <tbody>
             {table.getRowModel().rows.map((r) => (
               <tr key={r.id} className={`border-b border-rule/60 ${r.original.active ? "" : "text-muted"}`}>
-                {r.getVisibleCells().map((c) => <td key={c.id} className="px-2 py-1 align-top">{flexRender(c.column.columnDef.cell, c.getContext())}</td>)}
+                {r.getVisibleCells().map((c) => <td key={c.id} className={`px-2 py-1 align-top ${c.column.id === "name" ? "min-w-56" : c.column.id === "effect" ? "min-w-40" : ""}`}>{flexRender(c.column.columnDef.cell, c.getContext())}</td>)}
               </tr>
             ))}
           </tbody>

@@ -39,10 +39,10 @@ export function ProposalBody({ proposal, document }: { proposal: Proposal; docum
               ))}
             </tbody>
             <tfoot>
-              <tr><td colSpan={3} className="pt-2 text-right">Subtotal</td><td className="pt-2 text-right">{money(c.subtotal)}</td></tr>
-              <tr><td colSpan={3} className="text-right">Tax ({c.taxRatePercent}%)</td><td className="text-right">{money(c.tax)}</td></tr>
-              <tr className="font-semibold"><td colSpan={3} className="text-right">Total</td><td className="text-right" data-testid="total">{money(c.total)}</td></tr>
-              <tr><td colSpan={3} className="text-right">Deposit on approval ({c.depositPercent}%)</td><td className="text-right" data-testid="deposit">{money(c.deposit)}</td></tr>
+              <tr><td colSpan={3} className="pt-2 text-right">Subtotal</td><td className="pt-2 pl-4 text-right">{money(c.subtotal)}</td></tr>
+              <tr><td colSpan={3} className="text-right">Tax ({c.taxRatePercent}%)</td><td className="pl-4 text-right">{money(c.tax)}</td></tr>
+              <tr className="font-semibold"><td colSpan={3} className="text-right">Total</td><td className="pl-4 text-right" data-testid="total">{money(c.total)}</td></tr>
+              <tr><td colSpan={3} className="text-right">Deposit on approval ({c.depositPercent}%)</td><td className="pl-4 text-right" data-testid="deposit">{money(c.deposit)}</td></tr>
             </tfoot>
           </table>
         </div>
