@@ -1,6 +1,6 @@
 import {
   csvPreviewSchema, measurementDetailSchema, measurementListSchema, measurementSchema, photoListSchema, photoSchema,
-  type CsvPreview, type Measurement, type MeasurementDetail, type MeasurementInput, type Photo,
+  type CsvPreview, type Measurement, type MeasurementDetail, type MeasurementInput, type MeasurementUpdate, type Photo,
 } from "@hushmark/schemas";
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { API_BASE, ApiError, api } from "../../../lib/api-client";
@@ -43,6 +43,8 @@ export function usePhotos(projectId: string) {
 
 export const previewCsv = (projectId: string, text: string): Promise<CsvPreview> => api.post(`${base(projectId)}/measurements/csv-preview`, { text }, csvPreviewSchema);
 export const createMeasurement = (projectId: string, input: MeasurementInput): Promise<Measurement> => api.post(`${base(projectId)}/measurements`, input, measurementSchema);
+export const updateMeasurement = (projectId: string, id: string, patch: MeasurementUpdate): Promise<MeasurementDetail> =>
+  api.patch(`${base(projectId)}/measurements/${encodeURIComponent(id)}`, patch, measurementDetailSchema);
 export const deleteMeasurement = (projectId: string, id: string) => api.delete(`${base(projectId)}/measurements/${encodeURIComponent(id)}`);
 export const deletePhoto = (projectId: string, id: string) => api.delete(`${base(projectId)}/photos/${encodeURIComponent(id)}`);
 

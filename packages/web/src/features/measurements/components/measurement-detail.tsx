@@ -5,6 +5,7 @@ import { ErrorState } from "../../../components/ui/error-state";
 import { Spinner } from "../../../components/ui/spinner";
 import { audioUrl, csvUrl, useMeasurement } from "../api/measurements";
 import { usePlanPlaces } from "../api/plan-places";
+import { MeasurementEdit } from "./measurement-edit";
 import { PhotosPanel } from "./photos-panel";
 import { ProgressBar } from "./progress-bar";
 import { SpectrumChart } from "./spectrum-chart";
@@ -15,6 +16,7 @@ import { TimeHistoryChart } from "./time-history-chart";
 export function MeasurementDetail({ projectId, id, canEdit, onDelete }: { projectId: string; id: string; canEdit: boolean; onDelete: () => void }) {
   const q = useMeasurement(projectId, id);
   const [playing, setPlaying] = useState<number | null>(null);
+  const [editing, setEditing] = useState(false);
   const places = usePlanPlaces(projectId);
   if (q.isPending) return <Card className="p-6"><Spinner label="Loading the measurement" /></Card>;
   if (q.isError) return <ErrorState title="The measurement did not load" error={q.error} onRetry={() => void q.refetch()} />;
@@ -29,11 +31,13 @@ export function MeasurementDetail({ projectId, id, canEdit, onDelete }: { projec
         actions={
           <div className="flex items-center gap-2">
             {m.status === "ready" ? <a className="inline-flex min-h-11 items-center rounded-md border border-rule px-3 text-sm font-medium hover:border-muted" href={csvUrl(projectId, m.id)} download>Export CSV</a> : null}
+            {canEdit && m.status === "ready" && !editing ? <button type="button" className="inline-flex min-h-11 items-center rounded-md border border-rule px-3 text-sm font-medium hover:border-muted" onClick={() => setEditing(true)}>Edit</button> : null}
             {canEdit ? <button type="button" className="inline-flex min-h-11 items-center rounded-md border border-danger/40 px-3 text-sm font-medium text-danger hover:bg-danger/5" onClick={onDelete}>Delete</button> : null}
           </div>
         }
       />
       <div className="flex flex-col gap-5 p-5">
+        {editing ? <MeasurementEdit projectId={projectId} measurement={m} onDone={() => setEditing(false)} /> : null}
         {m.status === "processing" ? <ProgressBar value={m.progress} label="Analysing the recording" /> : null}
         {m.status === "failed" ? <p className="text-sm font-medium text-danger">{m.error}</p> : null}
         {m.status === "ready" ? (
