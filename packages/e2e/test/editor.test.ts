@@ -219,6 +219,48 @@ describe("the plan editor and the sound-path view", () => {
     await b.context.close();
   });
 
+  it("adds a room by typing its size, and loading their version after a conflict keeps mine in the history", async () => {
+    const a = await newPage(browser);
+    const b = await newPage(browser);
+    await signIn(a.page, baseUrl, SURVEYOR);
+    await signIn(b.page, baseUrl, "owner@larkspur.example");
+    const projectId = await createProject(a.page, baseUrl, "Editor test — keyboard and theirs");
+    await openSketch(a.page, baseUrl, projectId);
+    await a.page.getByRole("tab", { name: "Elements" }).click();
+    const form = a.page.getByRole("form", { name: "Add a room by size" });
+    await form.getByLabel("Width").fill("4.2");
+    await form.getByLabel("Depth").fill("3");
+    await form.getByRole("button", { name: "Add room" }).click();
+    await waitSaved(a.page);
+    let doc = (await getPlan(a.page, baseUrl, projectId)).document as Doc;
+    expect(ofType(doc, "room")[0]!.outline!.map((p) => [p.x, p.y])).toEqual([[0, 0], [4.2, 0], [4.2, 3], [0, 3]]);
+
+    await openSketch(b.page, baseUrl, projectId);
+    await a.page.getByRole("textbox", { name: /^Name of Room 1/ }).fill("Theirs");
+    await a.page.getByRole("textbox", { name: /^Name of Room 1/ }).press("Enter");
+    await waitSaved(a.page);
+    await selectInList(b.page, /Select Room 1/);
+    await setField(b.page, "Name", "Mine");
+    const dialog = b.page.getByRole("dialog", { name: "The plan was changed somewhere else" });
+    await dialog.waitFor({ timeout: 15_000 });
+    await dialog.getByRole("button", { name: "Load their version" }).click();
+    await waitSaved(b.page);
+    await b.page.getByRole("tab", { name: "Elements" }).click();
+    await expect(b.page.getByRole("textbox", { name: /^Name of Theirs/ }).inputValue()).resolves.toBe("Theirs");
+    doc = (await getPlan(b.page, baseUrl, projectId)).document as Doc;
+    expect(ofType(doc, "room")[0]!.name).toBe("Theirs");
+    const revisions = (await (await b.page.request.get(`${baseUrl}/api/v1/projects/${projectId}/plan/revisions`)).json()) as { revisions: Array<{ version: number }> };
+    const names: string[] = [];
+    for (const r of revisions.revisions) {
+      const rev = (await (await b.page.request.get(`${baseUrl}/api/v1/projects/${projectId}/plan/revisions/${r.version}`)).json()) as { document: Doc };
+      names.push(...ofType(rev.document, "room").map((room) => room.name ?? ""));
+    }
+    expect(names).toContain("Mine");
+    expect([...a.errors, ...b.errors].filter((e) => !/409/.test(e))).toEqual([]);
+    await a.context.close();
+    await b.context.close();
+  });
+
   it("keeps an edit made offline on the device and saves it when the connection is back", async () => {
     const { context, page, errors } = await newPage(browser);
     await signIn(page, baseUrl, SURVEYOR);

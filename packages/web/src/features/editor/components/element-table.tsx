@@ -28,7 +28,7 @@ function summary(plan: Plan, id: string): string {
  * Every element of the level as a table — the keyboard and screen-reader way to the same edits
  * as the canvas: select, rename, delete.
  */
-export const ElementTable = memo(function ElementTable({ plan, levelId, selection, store }: { plan: Plan; levelId: string; selection: readonly string[]; store: EditorStore }) {
+export const ElementTable = memo(function ElementTable({ plan, levelId, selection, store, readOnly = false }: { plan: Plan; levelId: string; selection: readonly string[]; store: EditorStore; readOnly?: boolean }) {
   const ids = Object.values(plan.elements).filter((e) => e.type !== "level" && e.type !== "neighbour" && levelOf(plan, e.id) === levelId).map((e) => e.id);
   const pieces = wallPiecesOf(plan).filter((p) => p.levelId === levelId).map((p) => p.id);
   const all = [...ids, ...pieces];
@@ -44,7 +44,7 @@ export const ElementTable = memo(function ElementTable({ plan, levelId, selectio
         {rows.map((id) => {
           const el = plan.elements[id];
           const selected = selection.includes(id);
-          const nameable = el && (el.type === "room" || el.type === "door" || el.type === "window" || el.type === "void" || el.type === "vent" || el.type === "duct" || el.type === "penetration");
+          const nameable = !readOnly && el && (el.type === "room" || el.type === "door" || el.type === "window" || el.type === "void" || el.type === "vent" || el.type === "duct" || el.type === "penetration");
           const title = elementTitle(plan, id);
           return (
             <tr key={id} aria-selected={selected} className={`border-t border-rule ${selected ? "bg-brand-soft" : ""}`}>
@@ -64,7 +64,7 @@ export const ElementTable = memo(function ElementTable({ plan, levelId, selectio
               <td className="px-2 py-1 text-muted">{summary(plan, id)}</td>
               <td className="whitespace-nowrap px-2 py-1 text-right">
                 <button type="button" className="min-h-9 rounded px-2 font-medium text-brand-strong hover:bg-brand-soft" aria-label={`Select ${title}`} onClick={() => store.select([id])}>Select</button>
-                {el ? <button type="button" className="min-h-9 rounded px-2 text-danger hover:bg-danger/5" aria-label={`Delete ${title}`} onClick={() => store.run(deleteElements([id], plan))}>Delete</button> : null}
+                {el && !readOnly ? <button type="button" className="min-h-9 rounded px-2 text-danger hover:bg-danger/5" aria-label={`Delete ${title}`} onClick={() => store.run(deleteElements([id], plan))}>Delete</button> : null}
               </td>
             </tr>
           );

@@ -14,6 +14,7 @@ import { ToolRail } from "./tool-rail";
 import { StatusLine } from "./status-line";
 import { DetailsPanel } from "../panels/details-panel";
 import { ElementTable } from "./element-table";
+import { AddRoomForm } from "./add-room-form";
 import { ProblemsList } from "./problems-list";
 import { ConflictDialog } from "./conflict-dialog";
 import { LevelBar, levelBelow } from "./level-bar";
@@ -130,7 +131,12 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
           </div>
           <div role="tabpanel" key={side} className="min-h-0 flex-1 overflow-y-auto">
             {side === "details" ? (readOnly ? <p className="p-4 text-sm text-muted">This plan is shared with you to read. Select the Paths tab to see where the sound gets through.</p> : <DetailsPanel plan={plan} selection={selection} store={store} problems={problems} />) : null}
-            {side === "elements" ? <ElementTable plan={plan} levelId={levelId} selection={selection} store={store} /> : null}
+            {side === "elements" ? (
+              <>
+                {!readOnly ? <AddRoomForm plan={plan} levelId={levelId} store={store} /> : null}
+                <ElementTable plan={plan} levelId={levelId} selection={selection} store={store} readOnly={readOnly} />
+              </>
+            ) : null}
             {side === "problems" ? <ProblemsList plan={plan} problems={problems} onPick={zoomTo} /> : null}
           </div>
         </aside>
