@@ -50,6 +50,7 @@ describe("the signed-in layout", () => {
       if (key === "GET /api/v1/projects") return { status: 200, body: { projects: [project] } };
       if (key === `GET /api/v1/projects/${project.id}`) return { status: 200, body: project };
       if (key === `GET /api/v1/projects/${project.id}/plan`) return { status: 200, body: { projectId: project.id, version: 3, document: {}, updatedAt: "2026-11-20T10:00:00.000Z", updatedBy: "Ada Surveyor" } };
+      if (key === `GET /api/v1/projects/${project.id}/proposals`) return { status: 200, body: { proposals: [] } };
       return undefined;
     });
     vi.stubGlobal("fetch", fetchMock);
@@ -67,7 +68,7 @@ describe("the signed-in layout", () => {
     await router.navigate(`/projects/${project.id}/options`);
     expect(await screen.findByText("Options is for the firm's team")).toBeTruthy();
     await router.navigate(`/projects/${project.id}/proposal`);
-    expect(await screen.findByRole("heading", { name: "Proposal" })).toBeTruthy();
+    expect(await screen.findByText("Your contractor has not sent a proposal for this project yet.", undefined, { timeout: 5000 })).toBeTruthy();
   });
 
   it("offers a retry when the session check fails for another reason than signing out", async () => {

@@ -37,9 +37,11 @@ export function ScenarioComparison({ scenarios, currency, onEdit, onPropose, pro
           <tr>
             <td />
             {scenarios.map((s) => (
-              <td key={s.id} className="flex flex-wrap gap-1 py-2 pr-3">
-                <Button variant="secondary" className="min-h-9 px-3 text-sm" onClick={() => onEdit(s)}>Edit</Button>
-                <Button className="min-h-9 px-3 text-sm" pending={proposing === s.id} onClick={() => onPropose(s)}>Make proposal</Button>
+              <td key={s.id} className="py-2 pr-3">
+                <div className="flex flex-wrap gap-1">
+                  <Button variant="secondary" className="min-h-9 px-3 text-sm" onClick={() => onEdit(s)}>Edit</Button>
+                  <Button className="min-h-9 px-3 text-sm" pending={proposing === s.id} onClick={() => onPropose(s)}>Make proposal</Button>
+                </div>
               </td>
             ))}
           </tr>

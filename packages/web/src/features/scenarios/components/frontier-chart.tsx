@@ -46,10 +46,11 @@ export function FrontierChart({ frontier, scenarios, targetDba, baseDba, currenc
             <title>{`${formatMoney(p.cost, currency)} → ${p.dba.toFixed(1)} dBA: ${p.items.join(", ") || "as it is"}`}</title>
           </circle>
         ))}
-        {scenarios.map((s) => (
-          <g key={s.label}>
+        {scenarios.map((s, i) => (
+          <g key={`${s.label}-${i}`}>
             <circle cx={x(s.cost)} cy={y(s.dba)} r={6} fill="none" stroke="#c98a12" strokeWidth={2} />
-            <text x={x(s.cost) + 8} y={y(s.dba) - 6} fontSize={11} fill="#1d2433">{s.label}</text>
+            {/* Labels alternate above and below so neighbouring scenarios stay readable. */}
+            <text x={x(s.cost) + 8} y={y(s.dba) + (i % 2 === 0 ? -8 : 16)} fontSize={11} fill="#1d2433">{s.label}</text>
           </g>
         ))}
       </svg>

@@ -10,7 +10,7 @@ export interface SpaceOption {
 }
 
 /** Room uses that are usually where the noise starts (a default only; the planner picks). */
-const NOISY_USES = new Set(["cafe", "kitchen", "plant", "cinema", "classroom", "retail"]);
+const NOISY_USES = ["cafe", "cinema", "plant", "classroom", "kitchen", "retail"];
 
 /** Rooms, voids, neighbours and the outdoors of a plan document, for the source and receiver pickers. */
 export function planSpaces(document: Record<string, unknown>): SpaceOption[] {
@@ -26,7 +26,7 @@ export function defaultSetup(document: Record<string, unknown>, planVersion: num
   const spaces = planSpaces(document);
   const receiver = spaces.find((s) => s.target) ?? spaces[0];
   const others = spaces.filter((s) => s.id !== receiver?.id && s.id !== "outdoors");
-  const source = others.find((s) => s.use && NOISY_USES.has(s.use)) ?? others[0];
+  const source = NOISY_USES.map((use) => others.find((s) => s.use === use)).find(Boolean) ?? others[0];
   if (!receiver || !source) return null;
   const t = receiver.target;
   const target = t?.kind === "nc" && t.nc !== undefined ? { kind: "nc" as const, nc: t.nc } : t?.kind === "dba" && t.dba !== undefined ? { kind: "dba" as const, dba: t.dba } : undefined;
