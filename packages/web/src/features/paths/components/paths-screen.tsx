@@ -14,7 +14,7 @@ import { projectKeys } from "../../projects/api/keys";
 import { isApiError } from "../../../lib/api-client";
 import { useAnalysis } from "../api/run-analysis";
 import { SHARE_LEGEND, shareColour } from "../model/share-scale";
-import { AnalysisInputs, defaultInputs, type PathInputs } from "./analysis-inputs";
+import { AnalysisInputs, defaultInputs, toAnalysisTarget, type PathInputs } from "./analysis-inputs";
 import { ShareOverlay, PathLines } from "./analysis-overlay";
 import { ResultSummary, PathsList } from "./result-summary";
 import { SpectrumChart } from "./spectrum-chart";
@@ -47,7 +47,7 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
   const [saving, setSaving] = useState(false);
   const [saveError, setSaveError] = useState<string | null>(null);
   const canvas = useElementSize<HTMLDivElement>();
-  const frame = useFillHeight<HTMLDivElement>(560);
+  const frame = useFillHeight<HTMLDivElement>(480);
   const fitted = useRef(false);
   // Until the person moves the view, it follows the canvas size (the layout settles after the first measure).
   useEffect(() => {
@@ -152,6 +152,13 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
           ) : analysis.isError ? <p role="alert" className="text-sm text-danger">{isApiError(analysis.error) ? analysis.error.message : "The analysis did not run."}</p> : null}
           {result ? (
             <>
+              {selectedEl?.type === "room" && inputs ? (
+                <div className="flex flex-wrap items-center gap-2 rounded-md border border-rule p-2 text-[14px]" aria-label="Picked on the plan">
+                  <span className="font-medium">{selectedEl.name}</span>
+                  <button type="button" className="min-h-11 rounded-md px-3 font-medium text-brand-strong hover:bg-brand-soft disabled:opacity-50" disabled={inputs.sourceId === selectedEl.id && inputs.sourceKind === "airborne"} onClick={() => setInputs({ ...inputs, sourceKind: "airborne", sourceId: selectedEl.id, ...(inputs.receiverId === selectedEl.id ? { receiverId: inputs.sourceId } : {}) })}>{plain ? "Noise is here" : "Make it the source"}</button>
+                  <button type="button" className="min-h-11 rounded-md px-3 font-medium text-brand-strong hover:bg-brand-soft disabled:opacity-50" disabled={inputs.receiverId === selectedEl.id} onClick={() => setInputs({ ...inputs, receiverId: selectedEl.id, ...(inputs.sourceId === selectedEl.id ? { sourceId: inputs.receiverId } : {}), ...(selectedEl.target ? { target: toAnalysisTarget(selectedEl.target) } : {}) })}>{plain ? "Should be quiet" : "Make it the receiver"}</button>
+                </div>
+              ) : null}
               <ResultSummary result={result} plain={plain} />
               <SpectrumChart result={result} dimmed={stale} />
               <WeakLinksList result={result} selected={selected} onPick={zoomTo} plain={plain} dimmed={stale} />
