@@ -113,11 +113,15 @@ describe("Brief and Measure", () => {
     await signIn(page, baseUrl);
     const projects = (await (await page.request.get(`${baseUrl}/api/v1/projects`)).json()) as { projects: { id: string; title: string }[] };
     const demo = projects.projects.find((p) => p.title.startsWith("Fernhollow"))!;
-    const add = (label: string, kind: string, roomId: string, top: number) =>
-      page.request.post(`${baseUrl}/api/v1/projects/${demo.id}/measurements`, { data: { label, kind, roomId, takenAt: "2026-05-02T10:00:00Z", source: "manual", leqDb: Array.from({ length: 21 }, (_, i) => top - i * 0.8) } });
-    expect((await add("E2E café counter", "source_side", "cafe", 78)).status()).toBe(201);
-    expect((await add("E2E recording room", "receiver_side", "record", 40)).status()).toBe(201);
+    const add = (label: string, kind: string, roomId: string, top: number, point: { x: number; y: number }) =>
+      page.request.post(`${baseUrl}/api/v1/projects/${demo.id}/measurements`, { data: { label, kind, roomId, point, takenAt: "2026-05-02T10:00:00Z", source: "manual", leqDb: Array.from({ length: 21 }, (_, i) => top - i * 0.8) } });
+    expect((await add("E2E café counter", "source_side", "cafe", 78, { x: 7, y: 2 })).status()).toBe(201);
+    expect((await add("E2E recording room", "receiver_side", "record", 40, { x: 2, y: 5 })).status()).toBe(201);
     await page.goto(`${baseUrl}/projects/${demo.id}/measure`);
+    // Both readings sit on the plan as pins; a pin opens its measurement.
+    await page.getByTestId("pins-map").waitFor();
+    await page.getByRole("button", { name: "Show E2E café counter" }).click();
+    await page.getByRole("heading", { name: "E2E café counter" }).waitFor();
     await page.getByLabel("Compare E2E café counter").check();
     await page.getByLabel("Compare E2E recording room").check();
     await expect(page.getByRole("heading", { name: /Measured level difference/ }).textContent()).resolves.toMatch(/38\.0 dBA overall/);

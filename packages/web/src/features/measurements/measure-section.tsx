@@ -7,6 +7,8 @@ import { ErrorState } from "../../components/ui/error-state";
 import { PageLoading } from "../../components/ui/spinner";
 import { useCurrentMe } from "../auth/components/use-current-me";
 import { deleteMeasurement, measurementKeys, useMeasurements } from "./api/measurements";
+import { usePlanPlaces } from "./api/plan-places";
+import { PinsMap } from "./components/pins-map";
 import { Comparison } from "./components/comparison";
 import { CsvImport } from "./components/csv-import";
 import { LiveAnalyzer } from "./components/live-analyzer";
@@ -25,6 +27,7 @@ export default function MeasureSection({ projectId }: { projectId: string }) {
   const [panel, setPanel] = useState<Panel>(null);
   const [selected, setSelected] = useState<string | null>(null);
   const [compare, setCompare] = useState<string[]>([]);
+  const places = usePlanPlaces(projectId);
 
   if (list.isPending) return <PageLoading label="Opening the measurements" />;
   if (list.isError) return <ErrorState title="The measurements did not load" error={list.error} onRetry={() => void list.refetch()} />;
@@ -76,6 +79,7 @@ export default function MeasureSection({ projectId }: { projectId: string }) {
           )}
         </Card>
         <div className="flex min-w-0 flex-col gap-4">
+          {measurements.some((m) => m.point) ? <PinsMap places={places} measurements={measurements} selected={current} onSelect={setSelected} /> : null}
           {compared.length >= 2 ? <Comparison projectId={projectId} measurements={compared} /> : null}
           {current ? (
             <MeasurementDetail
