@@ -50,7 +50,7 @@ export function AnalysisInputs({ plan, inputs, onChange, plain }: { plan: Plan; 
   const targets = [15, 20, 25, 30, 35, 40, 45].map((nc) => `nc:${nc}`).concat([25, 30, 35, 40, 45].map((d) => `dba:${d}`));
   if (!targets.includes(targetValue) && targetValue !== "none") targets.unshift(targetValue);
   return (
-    <div className="grid grid-cols-2 gap-2 lg:grid-cols-4">
+    <div className="grid grid-cols-2 gap-2 sm:grid-cols-4">
       <Select label={plain ? "Where the noise is" : "Source"} value={sourceValue} onChange={(v) => onChange(v.startsWith("impact:") ? { ...inputs, sourceKind: "impact", sourceId: v.slice(7) } : { ...inputs, sourceKind: "airborne", sourceId: v })}>
         <optgroup label="Airborne">
           {rooms.map((r) => <option key={r.id} value={r.id}>{r.name}</option>)}

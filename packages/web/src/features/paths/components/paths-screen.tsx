@@ -142,7 +142,7 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
             </div>
           </div>
         </div>
-        <aside aria-label="Results" className="flex h-[45%] min-h-0 shrink-0 flex-col gap-4 overflow-y-auto border-t border-rule p-3 lg:h-auto lg:w-[360px] lg:border-l lg:border-t-0">
+        <aside aria-label="Results" className="flex h-[40%] min-h-0 shrink-0 flex-col gap-4 overflow-y-auto border-t border-rule p-3 lg:h-auto lg:w-[360px] lg:border-l lg:border-t-0">
           {analysis.isPending && !result ? <p role="status" className="text-sm text-muted">Working out where the sound gets through…</p> : null}
           {problems ? (
             <div role="alert" className="rounded-md border border-danger/40 bg-danger/5 p-3 text-sm">
