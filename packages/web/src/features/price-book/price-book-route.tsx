@@ -7,6 +7,7 @@ import { PageLoading } from "../../components/ui/spinner";
 import { isApiError } from "../../lib/api-client";
 import { useCurrentMe } from "../auth/components/use-current-me";
 import { PRICE_BOOK_CSV_URL, useFirmSettings, useImportPriceBook, usePriceBook } from "./api/price-book";
+import { AddItemForm } from "./components/add-item-form";
 import { FirmSettingsForm } from "./components/firm-settings-form";
 import { PriceBookTable } from "./components/price-book-table";
 
@@ -23,6 +24,12 @@ export default function PriceBookRoute() {
     <div className="flex flex-col gap-5">
       <PageHeader title="Price book" description={owner ? "The upgrades the firm offers: what each applies to, what it does to the sound, and what it costs." : "The firm's upgrades and prices (only the owner can change them)."} />
       <PriceBookTable items={book.data.items} currency={book.data.currency} editable={owner} />
+      {owner ? (
+        <Card>
+          <CardHeader title="Add an upgrade" description="Prices in the firm's currency; fixed costs and band-by-band figures can be set through CSV." />
+          <div className="p-5"><AddItemForm /></div>
+        </Card>
+      ) : null}
       <div className="grid gap-5 lg:grid-cols-2">
         <Card>
           <CardHeader title="CSV" description="Export to edit in a spreadsheet; import to add or update by code." />
