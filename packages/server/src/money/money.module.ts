@@ -34,7 +34,7 @@ export interface MoneyModuleOptions {
  */
 export function createMoneyModule(deps: { dataSource: DataSource; config: AppConfig; logger: Logger; mailer: Mailer; projects: ProjectsService; catalogue: CatalogueService; sessions: Sessions; options?: MoneyModuleOptions | undefined }) {
   const { dataSource, config, logger, mailer, projects, catalogue, sessions } = deps;
-  const paymentsConfig = deps.options?.payments ?? loadPaymentsConfig(process.env);
+  const paymentsConfig = deps.options?.payments ?? loadPaymentsConfig({ ...process.env, NODE_ENV: config.env });
   const stripe = deps.options?.stripe ?? createStripe(paymentsConfig);
   const priceBook = createPriceBookService(dataSource);
   const searches = createSearchRegistry();

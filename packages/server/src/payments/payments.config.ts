@@ -11,6 +11,8 @@ const envSchema = z.object({
 
 /** How the server reaches the payment service: the hosted one in production, the local fake otherwise. */
 export interface PaymentsConfig {
+  /** False in production until both keys are set: deposits then answer 503 and say what is missing. */
+  enabled?: boolean;
   secretKey: string;
   webhookSecret: string;
   /** Unset: the SDK's own default (the hosted service). */
@@ -21,16 +23,17 @@ export interface PaymentsConfig {
 
 /**
  * Reads the payment settings. Outside production the defaults point at the local payments fake
- * (127.0.0.1:55028 over http, test keys); in production the keys are required and the SDK talks to
- * the hosted service unless host/port/protocol are set.
+ * (127.0.0.1:55028 over http, test keys); in production the SDK talks to the hosted service unless
+ * host/port/protocol are set, and deposits stay off until both keys are set.
  */
 export function loadPaymentsConfig(env: NodeJS.ProcessEnv = process.env): PaymentsConfig {
   const parsed = envSchema.safeParse(env);
   if (!parsed.success) throw new Error(`Hushmark's payment settings are not valid:\n${parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`).join("\n")}`);
   const e = parsed.data;
   const production = e.NODE_ENV === "production";
+  // A firm may run without online deposits; test keys must never stand in for real ones in production.
   if (production && (!e.HUSHMARK_STRIPE_SECRET_KEY || !e.HUSHMARK_STRIPE_WEBHOOK_SECRET)) {
-    throw new Error("HUSHMARK_STRIPE_SECRET_KEY and HUSHMARK_STRIPE_WEBHOOK_SECRET must be set in production.");
+    return { enabled: false, secretKey: "sk_live_unset", webhookSecret: "whsec_unset" };
   }
   const host = e.HUSHMARK_STRIPE_HOST ?? (production ? undefined : "127.0.0.1");
   const port = e.HUSHMARK_STRIPE_PORT ?? (production ? undefined : 55028);

@@ -31,6 +31,7 @@ export function createPaymentsService(dataSource: DataSource, deps: { config: Pa
   const payments = dataSource.getRepository(PaymentRow);
 
   async function startDeposit(actor: Actor, proposalId: string, approvedVersion: number): Promise<{ url: string; paymentId: string }> {
+    if (deps.config.enabled === false) throw new HttpError(503, "payments_not_set_up", "Online deposits are not set up on this server yet; the firm will send payment details. (The owner sets HUSHMARK_STRIPE_SECRET_KEY and HUSHMARK_STRIPE_WEBHOOK_SECRET.)");
     const { row, version } = await proposals.visible(actor, proposalId);
     if (approvedVersion !== version) throw conflict("stale_version", `You approved version ${approvedVersion}; the current version is ${version}. Reload the proposal.`);
     if (row.status === "deposit_paid" || row.status === "in_progress" || row.status === "verified") throw conflict("already_paid", "The deposit for this proposal is paid already.");
@@ -62,6 +63,7 @@ export function createPaymentsService(dataSource: DataSource, deps: { config: Pa
 
   /** Verifies the signature over the raw body; a bad or missing signature answers 400 and changes nothing. */
   function verify(raw: Buffer, signature: string | undefined): Stripe.Event {
+    if (deps.config.enabled === false) throw new HttpError(503, "payments_not_set_up", "Payments are not set up on this server.");
     if (!signature) throw new HttpError(400, "bad_signature", "Missing Stripe-Signature header.");
     try {
       return stripe.webhooks.constructEvent(raw, signature, deps.config.webhookSecret);
