@@ -9,6 +9,7 @@ import { Membership, Organization, Plan, PlanRevision, Project, ProjectClient, U
 import { emptyPlanDocument } from "../plans/plan-documents.js";
 import { DEMO_FIRM, DEMO_PASSWORD, DEMO_PEOPLE, DEMO_PROJECTS } from "./demo-data.js";
 import { seedDemoPriceBook } from "../price-book/seed-price-book.js";
+import { seedDemoMeasurements } from "../measurements/seed-demo-measurements.js";
 
 const config = loadConfig();
 const dataSource = createDataSource(config.databaseUrl, { poolSize: 2 });
@@ -41,4 +42,5 @@ if (await dataSource.getRepository(User).exists({ where: { email: owner.email } 
   console.log(`demo data: created ${DEMO_FIRM} with ${DEMO_PEOPLE.length} people and ${DEMO_PROJECTS.length} projects`);
 }
 await seedDemoPriceBook(dataSource, owner.email);
+await seedDemoMeasurements(dataSource, owner.email, examplesDir);
 await dataSource.destroy();
