@@ -118,7 +118,7 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
                 cursor={readOnly ? "grab" : cursors[toolId] ?? "crosshair"}
               />
             </div>
-            <StatusLine status={readOnly ? null : status} unit={plan.displayUnit} onUnit={readOnly ? undefined : (u) => store.run(setPlanUnit(u))} scale={viewport.scale} problems={counts} onProblems={() => setSide("problems")} hint={hint} />
+            <StatusLine status={readOnly ? null : status} unit={plan.displayUnit} onUnit={readOnly ? undefined : (u) => store.run(setPlanUnit(u))} scale={viewport.scale} problems={counts} onProblems={() => setSide("problems")} hint={hint} onConflict={() => setConflictOpen(true)} />
           </div>
         </div>
         <aside aria-label="Selection and lists" className="flex h-[40%] min-h-0 shrink-0 flex-col border-t border-rule lg:h-auto lg:w-[340px] lg:border-l lg:border-t-0">

@@ -15,8 +15,10 @@ const toneClass = { good: "text-good", muted: "text-muted", caution: "text-cauti
 const dotClass = { good: "bg-good", muted: "bg-muted", caution: "bg-caution", danger: "bg-danger" } as const;
 
 /** The line under the canvas: save state, units, zoom, problems, and the tool's hint. */
-export function StatusLine({ status, unit, onUnit, scale, problems, onProblems, hint }: {
+export function StatusLine({ status, unit, onUnit, scale, problems, onProblems, hint, onConflict }: {
   status: SaveStatus | null;
+  /** Reopens the choice when the plan was changed elsewhere. */
+  onConflict?: () => void;
   unit: "metric" | "imperial";
   onUnit?: (u: "metric" | "imperial") => void;
   scale: number;
@@ -33,6 +35,7 @@ export function StatusLine({ status, unit, onUnit, scale, problems, onProblems, 
           {s.text}
         </span>
       ) : null}
+      {status?.kind === "conflict" && onConflict ? <button type="button" onClick={onConflict} className="min-h-9 rounded px-2 font-medium text-danger underline">Choose a version</button> : null}
       {onUnit ? (
         <label className="inline-flex items-center gap-1 text-muted">
           Units

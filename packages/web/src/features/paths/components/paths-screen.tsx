@@ -58,6 +58,14 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
     setViewport(update);
   };
 
+  // A newer saved plan (from Sketch, or someone else) replaces the one shown; the analysis follows its version.
+  useEffect(() => {
+    if (response.version > version && !saving) {
+      store.load(openPlan(response.document, projectId, title).plan);
+      setVersion(response.version);
+    }
+  }, [response, version, saving, store, projectId, title]);
+
   const request = useMemo(() => (inputs ? toRequest(version, inputs) : null), [inputs, version]);
   const analysis = useAnalysis(projectId, request);
   const result = analysis.data;
