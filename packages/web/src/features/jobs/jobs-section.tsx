@@ -4,6 +4,7 @@ import { EmptyState } from "../../components/ui/empty-state";
 import { ErrorState } from "../../components/ui/error-state";
 import { PageLoading } from "../../components/ui/spinner";
 import { useCurrentMe } from "../auth/components/use-current-me";
+import { jobPhotoUrl, useJobPhotos, useUploadJobPhoto } from "./api/photos";
 import { useUpdateTask, useWorkOrders } from "./api/work-orders";
 
 const statusWords = { todo: "To do", doing: "Doing", done: "Done" } as const;
@@ -64,8 +65,32 @@ function WorkOrderCard({ order, projectId }: { order: WorkOrder; projectId: stri
             ))}
           </ul>
           {update.isError ? <p role="alert" className="mt-2 text-sm text-danger">{update.error.message}</p> : null}
+          <WorkPhotos projectId={projectId} order={order} canUpload={canTick} />
         </section>
       </div>
     </Card>
+  );
+}
+
+function WorkPhotos({ projectId, order, canUpload }: { projectId: string; order: WorkOrder; canUpload: boolean }) {
+  const photos = useJobPhotos(projectId);
+  const upload = useUploadJobPhoto(projectId);
+  const mine = (photos.data ?? []).filter((p) => p.elementId === order.elementId);
+  return (
+    <div className="mt-3">
+      <h3 className="mb-1 text-sm font-semibold">Photos of {order.elementName}</h3>
+      {mine.length === 0 ? <p className="text-sm text-muted">No photos yet.</p> : null}
+      <ul className="flex flex-wrap gap-2">
+        {mine.map((p) => <li key={p.id}><img src={jobPhotoUrl(projectId, p.id)} alt={p.caption || `Photo of ${order.elementName}`} className="h-20 w-28 rounded border border-rule object-cover" /></li>)}
+      </ul>
+      {canUpload ? (
+        <label className="mt-2 flex min-h-11 items-center gap-2 text-sm font-medium">
+          Add a photo
+          <input type="file" accept="image/jpeg,image/png,image/webp" className="text-sm" disabled={upload.isPending}
+            onChange={(e) => { const f = e.target.files?.[0]; if (f) upload.mutate({ file: f, elementId: order.elementId, caption: order.title }); e.target.value = ""; }} />
+        </label>
+      ) : null}
+      {upload.isError ? <p role="alert" className="text-sm text-danger">{upload.error.message}</p> : null}
+    </div>
   );
 }
