@@ -117,6 +117,8 @@ describe("from scenario to paid deposit", () => {
     expect(start.status, JSON.stringify(start.body)).toBe(201);
     const url = start.body.url as string;
     expect(url.startsWith(h.payments.url)).toBe(true);
+    const again = await c.post(`/api/v1/proposals/${proposalId}/deposit`).send({ version: 2 });
+    expect(again.body).toEqual(start.body);
     const declined = await fetch(url, { method: "POST", body: new URLSearchParams({ card: "4000 0000 0000 0002", expiry: "12/34", cvc: "123" }) });
     expect(declined.status).toBe(402);
     await h.payments.idle();

@@ -40,6 +40,12 @@ export function createPaymentsService(dataSource: DataSource, deps: { config: Pa
     const content = proposalContentSchema.parse(v.content);
     const amountMinor = Math.round(content.deposit * 100);
     if (amountMinor < 50) throw new HttpError(409, "no_deposit", "This proposal asks for no deposit; the firm will be in touch to start the work.");
+    // A second click (or a second tab) gets the payment page already open, so one deposit cannot be paid twice.
+    const open = await payments.findOne({ where: { proposalId, version, status: "pending" }, order: { createdAt: "DESC" } });
+    if (open) {
+      const existing = await stripe.checkout.sessions.retrieve(open.checkoutSessionId).catch(() => null);
+      if (existing?.status === "open" && existing.url) return { url: existing.url, paymentId: open.id };
+    }
     const paymentId = crypto.randomUUID();
     const portal = proposals.portalUrl(proposalId);
     // The idempotency key makes a retried create (network hiccup, double click) answer the same session.
@@ -98,8 +104,11 @@ export function createPaymentsService(dataSource: DataSource, deps: { config: Pa
         payment = await m.getRepository(PaymentRow).createQueryBuilder("p").setLock("pessimistic_write").where("p.checkout_session_id = :id", { id: session.id }).getOne();
         if (payment && payment.status !== "paid" && session.payment_status === "paid") {
           await m.getRepository(PaymentRow).update({ id: payment.id }, { status: "paid", paidAt: new Date(), failureMessage: null });
-          await m.getRepository(ProposalRow).createQueryBuilder().update().set({ status: "deposit_paid" }).where("id = :id AND status = 'approved'", { id: payment.proposalId }).execute();
-          await recordAudit(m, { organizationId: payment.organizationId, actorUserId: null, action: "payment.deposit_paid", entityType: "proposal", entityId: payment.proposalId, data: { paymentId: payment.id, amountMinor: payment.amountMinor, eventId: event.id } });
+          const moved = await m.getRepository(ProposalRow).createQueryBuilder().update().set({ status: "deposit_paid" }).where("id = :id AND status = 'approved'", { id: payment.proposalId }).execute();
+          // Money arrived for a proposal already paid (two payment pages paid): recorded for the firm to refund.
+          const action = moved.affected ? "payment.deposit_paid" : "payment.paid_again";
+          if (!moved.affected) logger.warn({ paymentId: payment.id, proposalId: payment.proposalId }, "a deposit was paid for a proposal that was already paid");
+          await recordAudit(m, { organizationId: payment.organizationId, actorUserId: null, action, entityType: "proposal", entityId: payment.proposalId, data: { paymentId: payment.id, amountMinor: payment.amountMinor, eventId: event.id } });
           paidNow = payment;
         }
       } else if (event.type === "payment_intent.payment_failed") {
