@@ -2,7 +2,7 @@ import { readFile } from "node:fs/promises";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { launchBrowser, newPage } from "../src/browser.js";
-import { clickPlan, createProject, drawTwoRooms, getPlan, pickConstruction, setField, signIn, waitSaved } from "../src/editor-page.js";
+import { clickPlan, createProject, drawTwoRooms, getPlan, pickConstruction, planToPage, setField, signIn, waitSaved } from "../src/editor-page.js";
 
 const SURVEYOR = "surveyor@larkspur.example";
 
@@ -88,7 +88,7 @@ describe("the plan editor and the sound-path view", () => {
 
     await page.getByRole("button", { name: "Room", exact: true }).click();
     const canvas = page.getByTestId("plan-canvas");
-    const a = await (await import("../src/editor-page.js")).planToPage(page, 1, 1);
+    const a = await planToPage(page, 1, 1);
     await page.mouse.move(a.x, a.y);
     await page.mouse.down();
     await page.mouse.move(a.x + 60, a.y - 40, { steps: 5 });
@@ -101,7 +101,7 @@ describe("the plan editor and the sound-path view", () => {
 
     await page.getByRole("button", { name: "Wall", exact: true }).click();
     await clickPlan(page, 1, 5);
-    const towards = await (await import("../src/editor-page.js")).planToPage(page, 3, 5);
+    const towards = await planToPage(page, 3, 5);
     await page.mouse.move(towards.x, towards.y);
     await page.keyboard.type("10'6\"");
     await page.keyboard.press("Enter");
@@ -284,6 +284,41 @@ describe("the plan editor and the sound-path view", () => {
     expect(ofType(after.document as Doc, "room").map((r) => r.name)).toContain("Offline room");
     expect(await page.evaluate((id) => localStorage.getItem(`hushmark.pending-plan.${id}`), projectId)).toBeNull();
     expect(errors.filter((e) => !/ERR_INTERNET_DISCONNECTED|Failed to fetch/.test(e))).toEqual([]);
+    await context.close();
+  });
+
+  it("on a tablet in portrait, a finger draws a room and two fingers zoom", async () => {
+    const context = await browser.newContext({ viewport: { width: 768, height: 1024 }, hasTouch: true });
+    const page = await context.newPage();
+    const errors: string[] = [];
+    page.on("pageerror", (e) => errors.push(e.message));
+    await signIn(page, baseUrl, SURVEYOR);
+    const projectId = await createProject(page, baseUrl, "Editor test — tablet");
+    await openSketch(page, baseUrl, projectId);
+    const cdp = await context.newCDPSession(page);
+    const touch = (type: "touchStart" | "touchMove" | "touchEnd", points: Array<{ x: number; y: number }>) =>
+      cdp.send("Input.dispatchTouchEvent", { type, touchPoints: points.map((p, id) => ({ x: p.x, y: p.y, id })) });
+
+    await page.getByRole("button", { name: "Room", exact: true }).tap();
+    const a = await planToPage(page, 1, 1), b = await planToPage(page, 5, 4);
+    await touch("touchStart", [a]);
+    for (let i = 1; i <= 10; i++) await touch("touchMove", [{ x: a.x + ((b.x - a.x) * i) / 10, y: a.y + ((b.y - a.y) * i) / 10 }]);
+    await touch("touchEnd", []);
+    await waitSaved(page);
+    const doc = (await getPlan(page, baseUrl, projectId)).document as Doc;
+    expect(ofType(doc, "room")[0]!.outline!.map((p) => [p.x, p.y])).toEqual([[1, 1], [5, 1], [5, 4], [1, 4]]);
+
+    const canvas = page.getByTestId("plan-canvas");
+    const before = Number(await canvas.getAttribute("data-scale"));
+    const box = (await canvas.boundingBox())!;
+    const cx = box.x + box.width / 2, cy = box.y + box.height / 2;
+    await touch("touchStart", [{ x: cx - 40, y: cy }, { x: cx + 40, y: cy }]);
+    for (let i = 1; i <= 10; i++) await touch("touchMove", [{ x: cx - 40 - i * 8, y: cy }, { x: cx + 40 + i * 8, y: cy }]);
+    await touch("touchEnd", []);
+    await expect.poll(async () => Number(await canvas.getAttribute("data-scale"))).toBeGreaterThan(before * 1.5);
+    // The pinch zoomed; it did not draw or move anything.
+    expect(ofType((await getPlan(page, baseUrl, projectId)).document as Doc, "room")).toHaveLength(1);
+    expect(errors).toEqual([]);
     await context.close();
   });
 
