@@ -149,4 +149,29 @@ describe("from a scenario to a paid deposit, in the browser", () => {
     await page.getByText("This proposal is not available to you").waitFor();
     await context.close();
   });
+
+  it("lets the owner change a price in place, which the planner then reads but cannot change", async () => {
+    const owner = await newPage(browser);
+    await owner.page.goto(`${baseUrl}/sign-in`);
+    await signIn(owner.page, "owner@larkspur.example");
+    await owner.page.getByRole("link", { name: "Price book" }).click();
+    await owner.page.getByRole("button", { name: /^Labour hours of Baffle box at the grille: 5\. Edit$/ }).click();
+    const input = owner.page.getByLabel("Labour hours of Baffle box at the grille");
+    await input.fill("-1");
+    await input.press("Enter");
+    await owner.page.getByRole("alert").getByText("Labour cannot be negative.").waitFor();
+    await input.fill("5.5");
+    await input.press("Enter");
+    await owner.page.getByRole("button", { name: /^Labour hours of Baffle box at the grille: 5\.5\. Edit$/ }).waitFor();
+    await owner.context.close();
+
+    const planner = await newPage(browser);
+    await planner.page.goto(`${baseUrl}/sign-in`);
+    await signIn(planner.page, "planner@larkspur.example");
+    await planner.page.getByRole("link", { name: "Price book" }).click();
+    const row = planner.page.locator("tr", { hasText: "Baffle box at the grille" });
+    await row.getByText("5.5", { exact: true }).waitFor();
+    await expect(row.getByRole("button").count()).resolves.toBe(0);
+    await planner.context.close();
+  });
 });
