@@ -169,7 +169,8 @@ export function createProposalsService(dataSource: DataSource, deps: { projects:
 
   async function decide(actor: Actor, id: string, decision: "approved" | "changes_asked", readVersion: number, body: string): Promise<Proposal> {
     const { row, version } = await visible(actor, id);
-    if (readVersion !== version || row.currentVersion !== version) throw conflict("stale_version", `You read version ${readVersion}; the current version is ${row.currentVersion}. Reload and read it before deciding.`);
+    if (readVersion !== version) throw conflict("stale_version", `You read version ${readVersion}; the current version is ${version}. Reload and read it before deciding.`);
+    if (row.currentVersion !== version) throw conflict("being_revised", "The firm is revising this proposal; the new version will reach you by e-mail.");
     if (row.status !== "sent") throw conflict("not_open", row.status === "approved" || row.status === "deposit_paid" ? "This proposal is approved already." : "This proposal is not waiting for a decision.");
     await dataSource.transaction(async (m) => {
       // The status check and the change happen in one statement so two decisions cannot both land.
