@@ -75,3 +75,18 @@ describe("element table", () => {
     expect(screen.getAllByRole("button", { name: /^Select/ }).length).toBeGreaterThan(3);
   });
 });
+
+describe("duplicate", () => {
+  it("copies a room with its door beside the original, selecting the copy", () => {
+    const store = storeWithDoor();
+    store.select(["west"]);
+    render(<DetailsPanel plan={store.plan} selection={store.selection} store={store} problems={[]} />);
+    fireEvent.click(screen.getByRole("button", { name: "Duplicate Waiting room" }));
+    const rooms = Object.values(store.plan.elements).filter((e) => e.type === "room");
+    const doors = Object.values(store.plan.elements).filter((e) => e.type === "door");
+    expect(rooms).toHaveLength(3);
+    expect(doors).toHaveLength(2);
+    const copy = store.plan.elements[store.selection[0]!];
+    expect(copy?.type === "room" && copy.outline[0]).toMatchObject({ x: 0.5, y: -0.5 });
+  });
+});

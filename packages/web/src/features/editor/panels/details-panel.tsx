@@ -1,5 +1,5 @@
 import type { EditorStore } from "@hushmark/editor-core";
-import { deleteElements } from "@hushmark/editor-core";
+import { copyElements, deleteElements, levelOf, pasteClip } from "@hushmark/editor-core";
 import type { Plan, Problem } from "@hushmark/floorplan";
 import { Button } from "../../../components/ui/button";
 import { RoomDetails } from "./room-details";
@@ -30,6 +30,15 @@ function Body({ plan, id, store }: { plan: Plan; id: string; store: EditorStore 
   }
 }
 
+/** Copies and pastes beside the original: the touch route to copy and paste. */
+function duplicate(store: EditorStore, plan: Plan, ids: readonly string[]): void {
+  const own = ids.filter((id) => id in plan.elements);
+  const levelId = own.map((id) => levelOf(plan, id)).find(Boolean);
+  if (!own.length || !levelId) return;
+  const { cmd, newIds } = pasteClip(copyElements(plan, own), { x: 0.5, y: -0.5 }, levelId, store.ids);
+  if (store.run(cmd)) store.select(newIds.filter((id) => own.some((o) => plan.elements[o]?.type === store.plan.elements[id]?.type)));
+}
+
 /** The right-hand panel: details of the selection, its problems and the cautions that apply. */
 export function DetailsPanel({ plan, selection, store, problems }: { plan: Plan; selection: readonly string[]; store: EditorStore; problems: readonly Problem[] }) {
   if (selection.length === 0) {
@@ -46,7 +55,10 @@ export function DetailsPanel({ plan, selection, store, problems }: { plan: Plan;
       <div className="flex flex-col gap-3 p-4">
         <h2 className="text-base font-semibold">{selection.length} items selected</h2>
         <ul className="text-sm text-muted">{selection.slice(0, 8).map((id) => <li key={id}>{elementTitle(plan, id)}</li>)}</ul>
-        <Button variant="danger" disabled={!deletable.length} onClick={() => store.run(deleteElements(deletable, plan))}>Delete {deletable.length}</Button>
+        <div className="flex gap-2">
+          <Button variant="secondary" disabled={!deletable.length} onClick={() => duplicate(store, plan, deletable)}>Duplicate</Button>
+          <Button variant="danger" disabled={!deletable.length} onClick={() => store.run(deleteElements(deletable, plan))}>Delete {deletable.length}</Button>
+        </div>
       </div>
     );
   }
@@ -59,7 +71,12 @@ export function DetailsPanel({ plan, selection, store, problems }: { plan: Plan;
     <div className="flex flex-col gap-4 p-4" key={id}>
       <div className="flex items-start justify-between gap-2">
         <h2 className="text-base font-semibold leading-tight">{title}</h2>
-        {!piece ? <Button variant="ghost" className="-mr-2 -mt-2 text-danger" onClick={() => store.run(deleteElements([id], plan))} aria-label={`Delete ${title}`}>Delete</Button> : null}
+        {!piece ? (
+          <div className="-mr-2 -mt-2 flex">
+            <Button variant="ghost" onClick={() => duplicate(store, plan, [id])} aria-label={`Duplicate ${title}`}>Duplicate</Button>
+            <Button variant="ghost" className="text-danger" onClick={() => store.run(deleteElements([id], plan))} aria-label={`Delete ${title}`}>Delete</Button>
+          </div>
+        ) : null}
       </div>
       {own.length ? (
         <ul className="flex flex-col gap-2" aria-label="Problems with this element">
