@@ -11,6 +11,8 @@ import { runStatus } from "./lib/run.mjs";
 import { buildAll, ensureDependencies } from "./lib/stack.mjs";
 
 const root = join(dirname(fileURLToPath(import.meta.url)), "..");
+// `npm run bench -- --only=floorplan` re-runs one package's benchmark and keeps the others' last results.
+const only = process.argv.find((a) => a.startsWith("--only="))?.slice("--only=".length);
 const tmp = mkdtempSync(join(tmpdir(), "hushmark-bench-"));
 let status = 0;
 try {
@@ -23,9 +25,9 @@ try {
   step("migrating the bench database…");
   runStatus("node", ["packages/server/dist/scripts/migrate.js"], { cwd: root, env: { ...process.env, DATABASE_URL: databaseUrl } });
   const packages = readdirSync(join(root, "packages")).filter((p) => existsSync(join(root, "packages", p, "package.json")));
-  for (const pkg of packages) rmSync(join(root, "packages", pkg, "bench-results.json"), { force: true });
+  for (const pkg of packages) if (!only || pkg === only) rmSync(join(root, "packages", pkg, "bench-results.json"), { force: true });
   step("running benchmarks (turbo run bench, one package at a time)…");
-  status = runStatus("npx", ["turbo", "run", "bench", "--concurrency=1", "--continue", "--output-logs=full"], {
+  status = runStatus("npx", ["turbo", "run", "bench", "--concurrency=1", "--continue", "--output-logs=full", ...(only ? [`--filter=@hushmark/${only}`] : [])], {
     cwd: root,
     env: { ...process.env, DATABASE_URL: databaseUrl, HUSHMARK_E2E_DATABASE_URL: e2eUrl, CHROMIUM_PATH: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium", TURBO_TELEMETRY_DISABLED: "1" },
   });
