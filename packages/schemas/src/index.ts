@@ -13,3 +13,4 @@ export * from "./price-book.js";
 export * from "./scenarios.js";
 export * from "./proposals.js";
 export * from "./work-orders.js";
+export { searchLimitsOfBrief, mergeSearchLimits } from "./brief-limits.js";

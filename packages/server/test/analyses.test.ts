@@ -58,6 +58,20 @@ describe("the analysis API", () => {
     expect(second.body.elements).toEqual(first.body.elements);
   });
 
+  it("aims at the brief's target when the request names none", async () => {
+    const none = await owner.post(`/api/v1/projects/${projectId}/analyses`).send(request(version, { target: undefined }));
+    expect(none.status).toBe(200);
+    expect(none.body.target).toBeNull();
+    const saved = await owner.put(`/api/v1/projects/${projectId}/brief`).send({ baseVersion: 0, brief: { target: { kind: "level", levelDba: 22 } } });
+    expect(saved.status, JSON.stringify(saved.body)).toBe(200);
+    const fromBrief = await owner.post(`/api/v1/projects/${projectId}/analyses`).send(request(version, { target: undefined }));
+    expect(fromBrief.body.target).toMatchObject({ kind: "dba", value: 22 });
+    expect(fromBrief.body.target.met).toBe(fromBrief.body.receiver.dba <= 22);
+    // A target in the request still wins.
+    const asked = await owner.post(`/api/v1/projects/${projectId}/analyses`).send(request(version));
+    expect(asked.body.target).toMatchObject({ kind: "nc", value: 25 });
+  });
+
   it("lets the project's client read a result", async () => {
     const res = await client.post(`/api/v1/projects/${projectId}/analyses`).send(request(version));
     expect(res.status).toBe(200);

@@ -88,6 +88,21 @@ describe("scenarios, option searches and the price book over the API", () => {
     expect(other.status).toBe(403);
   });
 
+  it("works to the brief's budget and accepted flags when the search sets none", async () => {
+    const brief = await p.owner.get(`/api/v1/projects/${p.projectId}/brief`);
+    const saved = await p.owner.put(`/api/v1/projects/${p.projectId}/brief`).send({ baseVersion: brief.body.version, brief: { budget: { amount: 400, currency: "EUR" }, accepts: { doorLook: true } } });
+    expect(saved.status, JSON.stringify(saved.body)).toBe(200);
+    const started = await p.planner.post(`/api/v1/projects/${p.projectId}/option-searches`).send({ setup: SETUP(p.planVersion), elementIds: ["door-studio", "outlet-party", "supply-duct", "shopfront"] });
+    expect(started.status).toBe(202);
+    const done = await until("the search", async () => {
+      const r = await p.planner.get(`/api/v1/projects/${p.projectId}/option-searches/${started.body.id}`);
+      return r.body.status === "running" ? undefined : r.body;
+    });
+    expect(done.status).toBe("done");
+    expect(done.result.best.cost).toBeLessThanOrEqual(400);
+    expect(done.result.best.excluded.some((e: { reason: string }) => /flag not allowed: reduces-ventilation/.test(e.reason))).toBe(true);
+  });
+
   it("exports the price book as CSV and imports it back, all or nothing", async () => {
     const csv = await p.owner.get("/api/v1/price-book/export.csv");
     expect(csv.headers["content-type"]).toMatch(/text\/csv/);

@@ -1,11 +1,12 @@
 import { createHash } from "node:crypto";
 import type { DataSource } from "typeorm";
 import { canonicalJson } from "@hushmark/floorplan";
-import type { AnalysisResult } from "@hushmark/schemas";
+import { analysisTargetOfBrief, type AnalysisResult } from "@hushmark/schemas";
 import type { Actor } from "../auth/actor.js";
 import { AnalysisCache } from "../entities/index.js";
 import { HttpError, notFound } from "../http/errors.js";
 import type { CatalogueService } from "../catalogue/catalogue.service.js";
+import { agreedBrief } from "../intake/agreed-brief.js";
 import type { ProjectsService } from "../projects/projects.service.js";
 import type { ParsedAnalysisRequest } from "./compute.js";
 import type { AnalysisPool } from "./pool.js";
@@ -33,8 +34,11 @@ export function createAnalysesService(dataSource: DataSource, projects: Projects
     return revision[0].document;
   }
 
-  async function analyse(actor: Actor, projectId: string, request: ParsedAnalysisRequest): Promise<AnalysisResult> {
+  async function analyse(actor: Actor, projectId: string, asked: ParsedAnalysisRequest): Promise<AnalysisResult> {
     await projects.get(actor, projectId);
+    // No target in the request: aim at the one agreed in the brief.
+    const briefTarget = asked.target ? undefined : analysisTargetOfBrief((await agreedBrief(dataSource, projectId)) ?? { target: null });
+    const request: ParsedAnalysisRequest = briefTarget ? { ...asked, target: briefTarget } : asked;
     const { extra, digest } = await catalogues.catalogueFor(actor.organizationId);
     const key = cacheKey(request, digest);
     const hit = await cache.findOne({ where: { projectId, cacheKey: key } });

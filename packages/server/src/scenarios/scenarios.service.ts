@@ -1,10 +1,11 @@
 import type { DataSource } from "typeorm";
 import { scenarioEvaluationSchema, type OptionSearchInput, type OptionSearchStatus, type Scenario, type ScenarioInput, type ScenarioSetup } from "@hushmark/schemas";
-import { optionSearchInputSchema, scenarioInputSchema } from "@hushmark/schemas";
+import { mergeSearchLimits, optionSearchInputSchema, scenarioInputSchema, searchLimitsOfBrief } from "@hushmark/schemas";
 import type { z } from "zod";
 import type { Actor } from "../auth/actor.js";
 import type { CatalogueService } from "../catalogue/catalogue.service.js";
 import { HttpError, notFound } from "../http/errors.js";
+import { agreedBrief } from "../intake/agreed-brief.js";
 import type { PriceBookService } from "../price-book/price-book.service.js";
 import type { ProjectsService } from "../projects/projects.service.js";
 import { planDocumentAt } from "./plan-at-version.js";
@@ -79,7 +80,9 @@ export function createScenariosService(dataSource: DataSource, projects: Project
       const document = await planDocumentAt(dataSource, projectId, input.setup.planVersion);
       const { catalogue } = await catalogues.catalogueFor(actor.organizationId);
       const items = await priceBook.list(actor);
-      const started = searches.start(actor.organizationId, projectId, { document, setup: input.setup, elementIds: input.elementIds, items, limits: input.limits, catalogue });
+      const brief = await agreedBrief(dataSource, projectId);
+      const limits = brief ? mergeSearchLimits(input.limits, searchLimitsOfBrief(brief)) : input.limits;
+      const started = searches.start(actor.organizationId, projectId, { document, setup: input.setup, elementIds: input.elementIds, items, limits, catalogue });
       if (!started) throw new HttpError(503, "busy", "Several searches are running already; wait for one to finish or cancel one, then try again.", undefined, { "Retry-After": "10" });
       return started;
     },
