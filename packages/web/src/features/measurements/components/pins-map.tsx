@@ -27,7 +27,8 @@ export function PinsMap({ places, measurements, selected, onSelect }: { places: 
   const maxY = Math.max(...pts.map((p) => p.y));
   const scale = Math.min((W - 2 * PAD) / Math.max(0.1, maxX - minX), (H - 2 * PAD) / Math.max(0.1, maxY - minY));
   const x = (v: number) => PAD + (v - minX) * scale;
-  const y = (v: number) => PAD + (v - minY) * scale;
+  // Plan y points north (up), as in the Sketch; SVG y points down.
+  const y = (v: number) => PAD + (maxY - v) * scale;
   const here = pinned.filter((m) => levelOf(m) === level);
   const levelName = (id: string | null) => places.levels.find((l) => l.id === id)?.name ?? "Plan";
 
