@@ -8,7 +8,7 @@ import type { Page } from "playwright-core";
 import { launchBrowser } from "../src/browser.js";
 import { ROOT } from "../src/stack.js";
 import { createProject, planToPage, signIn } from "../src/editor-page.js";
-import { startBenchStack } from "./stack.js";
+import { startStack } from "../src/stack.js";
 import { bundleRows } from "./bundles.js";
 
 const databaseUrl = process.env.HUSHMARK_E2E_DATABASE_URL;
@@ -42,7 +42,7 @@ async function stopRecording(page: Page): Promise<number[]> {
   return (await page.evaluate(STOP)) as number[];
 }
 
-const stack = await startBenchStack(databaseUrl);
+const stack = await startStack(databaseUrl);
 const browser = await launchBrowser();
 try {
   const plan = generateSyntheticBuilding({ rooms: 800, levels: 1, seed: 2026 });
