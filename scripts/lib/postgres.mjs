@@ -48,6 +48,11 @@ function clusterUser() {
   return "hushmark-db";
 }
 
+/** The numeric uid and gid of an OS user. */
+function idsOf(user) {
+  return { uid: Number(run("id", ["-u", user], { quiet: true }).trim()), gid: Number(run("id", ["-g", user], { quiet: true }).trim()) };
+}
+
 function asUser(user, command, args, options = {}) {
   return user ? run("runuser", ["-u", user, "--", command, ...args], options) : run(command, args, options);
 }
@@ -83,8 +88,7 @@ export function startCluster({ dataDir, port, logFile }) {
     const pwFile = join(parent, ".initdb-pw");
     writeFileSync(pwFile, password, { mode: 0o600 });
     if (user) {
-      const uid = Number(run("id", ["-u", user], { quiet: true }).trim());
-      const gid = Number(run("id", ["-g", user], { quiet: true }).trim());
+      const { uid, gid } = idsOf(user);
       chownSync(dataDir, uid, gid);
       chownSync(pwFile, uid, gid);
       chmodSync(parent, 0o755);
@@ -125,8 +129,8 @@ export function startCluster({ dataDir, port, logFile }) {
   if (user && logFile) {
     mkdirSync(dirname(logFile), { recursive: true });
     writeFileSync(logFile, "", { flag: "a" });
-    const uid = Number(run("id", ["-u", user], { quiet: true }).trim());
-    chownSync(logFile, uid, uid === 0 ? 0 : Number(run("id", ["-g", user], { quiet: true }).trim()));
+    const { uid, gid } = idsOf(user);
+    chownSync(logFile, uid, gid);
   }
   asUser(user, join(bin, "pg_ctl"), ["-D", dataDir, "-l", logFile ?? "/dev/null", "-w", "-t", "60", "start"], { quiet: true });
   done(`PostgreSQL running on 127.0.0.1:${port}`);
@@ -149,8 +153,7 @@ export function prepareOwnedDir(dir) {
   const user = clusterUser();
   mkdirSync(dir, { recursive: true });
   if (user) {
-    const uid = Number(run("id", ["-u", user], { quiet: true }).trim());
-    const gid = Number(run("id", ["-g", user], { quiet: true }).trim());
+    const { uid, gid } = idsOf(user);
     chownSync(dir, uid, gid);
     chmodSync(dir, 0o755);
   }
