@@ -12,6 +12,8 @@ export type {
   Penetration, Opening, Vent, Duct, Void, Neighbour, Pin, Note, Finish, Target, Leaks, Faces,
   WallSetting, Point, Vertex, RoomUse,
 } from "./document/schema.js";
+export { underlaySchema } from "./document/underlays.js";
+export type { Underlay } from "./document/underlays.js";
 export { OUTDOORS_ID, elementIdSchema, edgeRef, edgeRefParts } from "./document/ids.js";
 export { migratePlan, migrationsApplied, planMigrations, PlanMigrationError } from "./document/migrate.js";
 export type { PlanMigration } from "./document/migrate.js";

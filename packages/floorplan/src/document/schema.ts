@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { elementIdSchema } from "./ids.js";
+import { underlaySchema } from "./underlays.js";
 
 /** The document's format name; a file without it is not a Hushmark plan. */
 export const PLAN_FORMAT = "hushmark-plan";
@@ -250,6 +251,8 @@ export const planSchema = z
     defaults: planDefaultsSchema,
     elements: z.record(z.string(), elementSchema),
     wallSettings: z.record(z.string(), wallSettingSchema).default({}),
+    /** Drawings traced over, bottom first; left out when there are none. */
+    underlays: z.array(underlaySchema).optional(),
   })
   .superRefine((plan, ctx) => {
     for (const [key, el] of Object.entries(plan.elements)) {
@@ -257,6 +260,11 @@ export const planSchema = z
         ctx.addIssue({ code: "custom", path: ["elements", key, "id"], message: `element stored under "${key}" has id "${el.id}"` });
       }
     }
+    const seen = new Set<string>();
+    plan.underlays?.forEach((u, i) => {
+      if (seen.has(u.id)) ctx.addIssue({ code: "custom", path: ["underlays", i, "id"], message: `two underlays have the id "${u.id}"` });
+      seen.add(u.id);
+    });
   });
 export type Plan = z.infer<typeof planSchema>;
 /** A plan as written by hand or by an older editor: defaults may be missing. */
