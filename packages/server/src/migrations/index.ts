@@ -3,9 +3,10 @@ import { AnalysisCache1796150944729 } from "./1796150944729-AnalysisCache.js";
 import { FirmConstructions1796151221092 } from "./1796151221092-FirmConstructions.js";
 import { IntakeMeasurementsFiles1796151662461 } from "./1796151662461-IntakeMeasurementsFiles.js";
 import { ProposalsAndPayments1796152691589 } from "./1796152691589-ProposalsAndPayments.js";
+import { OptionSearches1796158450587 } from "./1796158450587-OptionSearches.js";
 
 /**
  * Every migration in order. A new one is generated with
  * `npm run -w @hushmark/server migration:generate -- src/migrations/Name` and appended here.
  */
-export const migrations = [InitialSchema1796149875228, AnalysisCache1796150944729, FirmConstructions1796151221092, IntakeMeasurementsFiles1796151662461, ProposalsAndPayments1796152691589];
+export const migrations = [InitialSchema1796149875228, AnalysisCache1796150944729, FirmConstructions1796151221092, IntakeMeasurementsFiles1796151662461, ProposalsAndPayments1796152691589, OptionSearches1796158450587];

@@ -19,13 +19,20 @@ import { projectProposalRoutes, proposalsRouter } from "../proposals/proposals.r
 import { createProposalsService, type ProposalsService } from "../proposals/proposals.service.js";
 import { scenarioRoutes } from "../scenarios/scenarios.routes.js";
 import { createScenariosService } from "../scenarios/scenarios.service.js";
-import { createSearchRegistry } from "../scenarios/search-registry.js";
+import { createSearchRegistry, type SearchRegistryOptions } from "../scenarios/search-registry.js";
 import { workOrderProjectRoutes, workOrderTasksRouter } from "../work-orders/work-orders.routes.js";
 import { createWorkOrdersService } from "../work-orders/work-orders.service.js";
 
 export interface MoneyModuleOptions {
   payments?: PaymentsConfig;
   stripe?: Stripe;
+  searches?: SearchRegistryOptions;
+}
+
+/** Outside production, `HUSHMARK_TEST_SEARCH_STEP_MS` slows each search step (tests that cancel a running search across processes). */
+function searchOptions(config: AppConfig, given: SearchRegistryOptions | undefined): SearchRegistryOptions {
+  const step = Number(process.env.HUSHMARK_TEST_SEARCH_STEP_MS ?? 0);
+  return { ...(config.env !== "production" && step > 0 ? { stepDelayMs: step } : {}), ...given };
 }
 
 /**
@@ -37,7 +44,7 @@ export function createMoneyModule(deps: { dataSource: DataSource; config: AppCon
   const paymentsConfig = deps.options?.payments ?? loadPaymentsConfig({ ...process.env, NODE_ENV: config.env });
   const stripe = deps.options?.stripe ?? createStripe(paymentsConfig);
   const priceBook = createPriceBookService(dataSource);
-  const searches = createSearchRegistry();
+  const searches = createSearchRegistry(dataSource, searchOptions(config, deps.options?.searches));
   const scenarios = createScenariosService(dataSource, projects, catalogue, priceBook, searches);
   const jobs = createJobQueue({ databaseUrl: config.databaseUrl, schema: config.jobsSchema, logger, queues: [proposalPdfQueue(dataSource, catalogue, logger) as QueueSpec<never>] });
   let proposals: ProposalsService;

@@ -11,7 +11,7 @@ import type { ProjectsService } from "../projects/projects.service.js";
 import { planDocumentAt } from "./plan-at-version.js";
 import { evaluateScenario, type EvaluationOutcome, type PickedUpgrade } from "./scenario-evaluate.js";
 import { ScenarioRow } from "./scenario.entity.js";
-import type { SearchRegistry } from "./search-registry.js";
+import { SEARCH_KEEP_MINUTES, type SearchRegistry } from "./search-registry.js";
 
 type Input = z.output<typeof scenarioInputSchema>;
 
@@ -82,19 +82,19 @@ export function createScenariosService(dataSource: DataSource, projects: Project
       const items = await priceBook.list(actor);
       const brief = await agreedBrief(dataSource, projectId);
       const limits = brief ? mergeSearchLimits(input.limits, searchLimitsOfBrief(brief)) : input.limits;
-      const started = searches.start(actor.organizationId, projectId, { document, setup: input.setup, elementIds: input.elementIds, items, limits, catalogue });
-      if (!started) throw new HttpError(503, "busy", "Several searches are running already; wait for one to finish or cancel one, then try again.", undefined, { "Retry-After": "10" });
+      const started = await searches.start(actor.organizationId, projectId, actor.userId, { document, setup: input.setup, elementIds: input.elementIds, items, limits, catalogue });
+      if (!started) throw new HttpError(503, "busy", "Several searches are running on this server already; wait for one to finish or cancel one, then try again.", undefined, { "Retry-After": "10" });
       return started;
     },
     async search(actor: Actor, projectId: string, id: string): Promise<OptionSearchStatus> {
       await projects.get(actor, projectId);
-      const s = searches.get(actor.organizationId, projectId, id);
-      if (!s) throw notFound("That search (searches are kept for 15 minutes after they end)");
+      const s = await searches.get(actor.organizationId, projectId, id);
+      if (!s) throw notFound(`That search (searches are kept for ${SEARCH_KEEP_MINUTES} minutes after they end)`);
       return s;
     },
     async cancelSearch(actor: Actor, projectId: string, id: string): Promise<OptionSearchStatus> {
       await projects.get(actor, projectId);
-      const s = searches.cancel(actor.organizationId, projectId, id);
+      const s = await searches.cancel(actor.organizationId, projectId, id);
       if (!s) throw notFound("That search");
       return s;
     },
