@@ -16,6 +16,12 @@ export type { OpeningKind } from "./commands/openings.js";
 export { addPin, addNote, addVent, addDuct, addVoid } from "./commands/marks.js";
 export { moveElements, deleteElements, dependents, setProperties, setWallSetting, setPlanUnit, addLevel, renameElement } from "./commands/edit.js";
 export { copyElements, pasteClip } from "./commands/clipboard.js";
+export { addUnderlay, setUnderlayPlacement, setUnderlayLook, removeUnderlay } from "./commands/underlays.js";
+export type { NewUnderlay } from "./commands/underlays.js";
+export {
+  underlayPixelToPlan, underlayPlanToPixel, underlayCorners, calibrateUnderlay, calibrateUnderlayTyped, rotateUnderlayAbout, squaringTurnDeg, normalDeg,
+} from "./underlays/placement.js";
+export type { UnderlayPlacement, CalibrationResult } from "./underlays/placement.js";
 export type { Clip } from "./commands/clipboard.js";
 
 export { snapPoint, snapToGrid } from "./geometry/snap.js";
