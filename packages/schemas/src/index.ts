@@ -14,3 +14,4 @@ export * from "./scenarios.js";
 export * from "./proposals.js";
 export * from "./work-orders.js";
 export { searchLimitsOfBrief, mergeSearchLimits } from "./brief-limits.js";
+export * from "./underlays.js";
