@@ -2,8 +2,8 @@
  * Steady-state power balance of the whole network, per band: for every space j whose level is
  * not fixed, A_j·e_j = Σ_i τS_ij·e_i + b_j (e = 10^(L/10)), i.e. e = C·e + s with C_ji = τS_ij/A_j.
  * Solved by symmetric Gauss–Seidel sweeps (all bands at once), nodes ordered breadth-first from
- * the excitation, stopping on a rate-corrected relative change. Converges whenever the power
- * balance has a solution (C's spectral radius < 1, true when every A_j exceeds the transmitting
+ * the excitation, each band stopping on its own rate-corrected relative change. Converges
+ * whenever the power balance has a solution (C's spectral radius < 1, true when every A_j exceeds the transmitting
  * area leaving j).
  */
 import type { CompiledNetwork } from "./compile.js";
@@ -105,8 +105,9 @@ export function overTransmittingSpaces(c: CompiledNetwork): { space: number; ban
 }
 
 /**
- * One Gauss–Seidel sweep over `order` (forward or backward); returns the largest relative change.
- * Written with local typed arrays only: this loop is the solver's whole cost.
+ * One Gauss–Seidel sweep over `order` (forward or backward) for the bands lo…hi−1; writes each
+ * band's largest relative change into `change`. Written with local typed arrays only: this loop
+ * is the solver's whole cost.
  */
 function sweepOnce(
   c: CompiledNetwork,
@@ -116,7 +117,10 @@ function sweepOnce(
   forward: boolean,
   acc: Float64Array,
   floor: number,
-): number {
+  lo: number,
+  hi: number,
+  change: Float64Array,
+): void {
   const B = c.B;
   const w = c.weight;
   const absorption = c.absorption;
@@ -125,27 +129,26 @@ function sweepOnce(
   const adjLink = c.adjLink;
   const injection = p.injection;
   const count = order.length;
-  let change = 0;
+  change.fill(0);
   for (let t = 0; t < count; t++) {
     const j = order[forward ? t : count - 1 - t]!;
     const jb = j * B;
-    for (let b = 0; b < B; b++) acc[b] = injection[jb + b]!;
+    for (let b = lo; b < hi; b++) acc[b] = injection[jb + b]!;
     const end = adjStart[j + 1]!;
     for (let k = adjStart[j]!; k < end; k++) {
       const ib = adjNode[k]! * B;
       const lb = adjLink[k]! * B;
-      for (let b = 0; b < B; b++) acc[b] = acc[b]! + w[lb + b]! * e[ib + b]!;
+      for (let b = lo; b < hi; b++) acc[b] = acc[b]! + w[lb + b]! * e[ib + b]!;
     }
-    for (let b = 0; b < B; b++) {
+    for (let b = lo; b < hi; b++) {
       const v = acc[b]! / absorption[jb + b]!;
       if (v > floor) {
         const d = Math.abs(v - e[jb + b]!) / v;
-        if (d > change) change = d;
+        if (d > change[b]!) change[b] = d;
       }
       e[jb + b] = v;
     }
   }
-  return change;
 }
 
 /** Solve the power balance; energies per space and band (n·B), fixed spaces at their fixed values. */
@@ -168,17 +171,33 @@ export function solveEnergies(
   // 300 dB above the strongest excitation: no physical steady state gets there.
   const ceiling = largest * 1e30;
   const acc = new Float64Array(B);
-  let previous = Infinity;
-  let errorEstimate = Infinity;
+  // Each band is a separate linear system: it stops being swept once it meets the tolerance, so
+  // the fast high bands do not pay for the slow low ones. Only the window lo…hi−1 that still
+  // holds unconverged bands is swept (bands inside it keep improving, which does no harm).
+  const change = new Float64Array(B);
+  const previous = new Float64Array(B).fill(Infinity);
+  const estimate = new Float64Array(B).fill(Infinity);
+  const done = new Uint8Array(B);
+  let lo = 0;
+  let hi = B;
+  const worst = () => estimate.reduce((m, v) => Math.max(m, v), 0);
   for (let sweep = 1; sweep <= maxSweeps; sweep++) {
-    const change = sweepOnce(c, p, e, order, sweep % 2 === 1, acc, floor);
+    sweepOnce(c, p, e, order, sweep % 2 === 1, acc, floor, lo, hi, change);
     if (!(maxEnergy(e, order, c.B) <= ceiling)) {
       return { energy: e, stats: { sweeps: sweep, converged: false, diverged: true, errorEstimate: Infinity } };
     }
-    const rate = previous > 0 && Number.isFinite(previous) ? Math.min(change / previous, 0.999) : 0.999;
-    errorEstimate = change === 0 ? 0 : (change * rate) / (1 - rate);
-    if (change <= tol && errorEstimate <= tol) return { energy: e, stats: { sweeps: sweep, converged: true, diverged: false, errorEstimate } };
-    previous = change;
+    for (let b = lo; b < hi; b++) {
+      if (done[b]) continue;
+      const ch = change[b]!;
+      const prev = previous[b]!;
+      const rate = prev > 0 && Number.isFinite(prev) ? Math.min(ch / prev, 0.999) : 0.999;
+      estimate[b] = ch === 0 ? 0 : (ch * rate) / (1 - rate);
+      if (ch <= tol && estimate[b]! <= tol) done[b] = 1;
+      previous[b] = ch;
+    }
+    while (lo < hi && done[lo]) lo++;
+    while (hi > lo && done[hi - 1]) hi--;
+    if (lo === hi) return { energy: e, stats: { sweeps: sweep, converged: true, diverged: false, errorEstimate: worst() } };
   }
-  return { energy: e, stats: { sweeps: maxSweeps, converged: false, diverged: false, errorEstimate } };
+  return { energy: e, stats: { sweeps: maxSweeps, converged: false, diverged: false, errorEstimate: worst() } };
 }
