@@ -12,10 +12,16 @@ export interface WallHost {
   ownerId: string;
 }
 
-const hostsCache = new WeakMap<object, WallHost[]>();
+const hostsCache = new WeakMap<object, { list: WallHost[]; byRef: Map<string, WallHost> }>();
 
 /** Every room edge and free wall of the plan, in id order (cached per elements record). */
 export function wallHosts(plan: Plan): WallHost[] {
+  return hostIndex(plan).list;
+}
+
+// Opening placement asks for one host per door and window: a lookup by ref keeps a plan of
+// thousands of openings from scanning every room edge for each.
+function hostIndex(plan: Plan): { list: WallHost[]; byRef: Map<string, WallHost> } {
   const hit = hostsCache.get(plan.elements);
   if (hit) return hit;
   const out: WallHost[] = [];
@@ -26,8 +32,9 @@ export function wallHosts(plan: Plan): WallHost[] {
     }
   }
   for (const w of elementsOfType(plan, "wall")) out.push(freeWallHost(w));
-  hostsCache.set(plan.elements, out);
-  return out;
+  const index = { list: out, byRef: new Map(out.map((h) => [h.ref, h])) };
+  hostsCache.set(plan.elements, index);
+  return index;
 }
 
 function freeWallHost(w: FreeWall): WallHost {
@@ -43,7 +50,7 @@ export function hostOf(plan: Plan, wallRef: string): WallHost | undefined {
   if (el?.type === "wall") return freeWallHost(el);
   const parts = edgeRefParts(wallRef);
   if (!parts) return undefined;
-  return wallHosts(plan).find((h) => h.ref === wallRef);
+  return hostIndex(plan).byRef.get(wallRef);
 }
 
 /** The level an element is drawn on; openings take their host's, ducts their first grille's. */
