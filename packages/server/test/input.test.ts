@@ -57,6 +57,10 @@ describe("bad input", () => {
     ["upload photo", "post", (id) => `/api/v1/projects/${id}/photos`, {}, ["file"]],
     ["photo image", "get", (id) => `/api/v1/projects/${id}/photos/00000000-0000-4000-8000-000000000000/image?size=huge`, undefined, ["size"]],
     ["delete photo", "delete", (id) => `/api/v1/projects/${id}/photos/nope`, undefined, ["photoId"]],
+    ["list underlays", "get", () => "/api/v1/projects/nope/underlays", undefined, ["projectId"]],
+    ["upload underlay", "post", (id) => `/api/v1/projects/${id}/underlays`, {}, ["file"]],
+    ["underlay image", "get", (id) => `/api/v1/projects/${id}/underlays/nope/image`, undefined, ["underlayId"]],
+    ["delete underlay", "delete", (id) => `/api/v1/projects/${id}/underlays/nope`, undefined, ["underlayId"]],
     ["add price book item", "post", () => "/api/v1/price-book/items", { code: "X", family: "loud", appliesTo: [], effect: { kind: "added-layer", deltaTlDb: -1 } }, ["code", "name", "family", "appliesTo", "effect.deltaTlDb"]],
     ["edit price book item", "patch", () => "/api/v1/price-book/items/nope", { labourHours: -1 }, ["itemId"]],
     ["remove price book item", "delete", () => "/api/v1/price-book/items/nope", undefined, ["itemId"]],
@@ -83,6 +87,19 @@ describe("bad input", () => {
     const got = (res.body.error.details as { path: string; message: string }[]).map((d) => d.path);
     for (const p of paths) expect(got, JSON.stringify(res.body)).toContain(p);
     for (const d of res.body.error.details) expect(d.message.length).toBeGreaterThan(3);
+  });
+
+  it("refuses text holding a NUL character with 400 and the field's path, and stores nothing", async () => {
+    const before = (await owner.get("/api/v1/projects")).body.projects.length;
+    const res = await owner.post("/api/v1/projects").send({ title: "Bad\u0000title" });
+    expect(res.status).toBe(400);
+    expect(res.body.error.details).toEqual([{ path: "title", message: expect.stringMatching(/NUL character/) }]);
+    const plan = (await owner.get(`/api/v1/projects/${projectId}/plan`)).body;
+    const save = await owner.put(`/api/v1/projects/${projectId}/plan`).send({ baseVersion: plan.version, document: { ...plan.document, name: "a\u0000b" } });
+    expect(save.status).toBe(400);
+    expect(save.body.error.details[0].path).toBe("document.name");
+    expect((await owner.get("/api/v1/projects")).body.projects.length).toBe(before);
+    expect((await owner.get(`/api/v1/projects/${projectId}/plan`)).body.version).toBe(plan.version);
   });
 
   it("answers malformed JSON with 400 and a readable message", async () => {

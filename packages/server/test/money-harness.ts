@@ -5,7 +5,7 @@ import type { AddressInfo } from "node:net";
 import { pino } from "pino";
 import supertest from "supertest";
 import type { DataSource } from "typeorm";
-import { startMailFake, startPaymentsFake, type MailFake, type PaymentsFake } from "@hushmark/fakes";
+import { startMailFake, startPaymentsFake, startS3Fake, type MailFake, type PaymentsFake, type S3Fake } from "@hushmark/fakes";
 import type { PriceBookItem } from "@hushmark/schemas";
 import { createApp } from "../src/app.js";
 import { loadConfig } from "../src/config.js";
@@ -18,6 +18,8 @@ export const demoPlan = JSON.parse(readFileSync(new URL("../../../examples/fernh
 
 export interface MoneyHarness extends Harness {
   payments: PaymentsFake;
+  /** Where proposal PDFs and closing reports are kept. */
+  s3: S3Fake;
   baseUrl: string;
 }
 
@@ -27,6 +29,7 @@ export interface MoneyHarness extends Harness {
  */
 export async function startMoneyHarness(): Promise<MoneyHarness> {
   const mail = await startMailFake();
+  const s3 = await startS3Fake();
   const dataSource: DataSource = createDataSource(process.env.DATABASE_URL!, { poolSize: 5 });
   await dataSource.initialize();
   // Listen first so the public URL (mailed links) and the webhook URL know the port.
@@ -42,11 +45,13 @@ export async function startMoneyHarness(): Promise<MoneyHarness> {
     HUSHMARK_MAIL_API_URL: `http://127.0.0.1:${mail.httpPort}`,
     HUSHMARK_PUBLIC_URL: baseUrl,
     HUSHMARK_LOG_LEVEL: "silent",
+    HUSHMARK_S3_ENDPOINT: s3.endpoint,
+    HUSHMARK_S3_BUCKET: "hushmark-money-test",
   });
   const { app, close } = createApp({
     dataSource,
     config,
-    logger: pino({ level: "silent" }),
+    logger: pino({ level: process.env.HUSHMARK_TEST_LOG_LEVEL ?? "silent" }),
     signInLimits: { windowMs: 60_000, perAddress: 100_000, perAccountAndAddress: 100_000, perAccount: 100_000 },
     accountLimitPerAddress: 100_000,
     money: { payments: { secretKey: "sk_test_money", webhookSecret: WEBHOOK_SECRET, host: "127.0.0.1", port: payments.port, protocol: "http" } },
@@ -56,6 +61,7 @@ export async function startMoneyHarness(): Promise<MoneyHarness> {
     dataSource,
     mail,
     payments,
+    s3,
     baseUrl,
     request: () => supertest.agent(baseUrl),
     close: async () => {
@@ -64,6 +70,7 @@ export async function startMoneyHarness(): Promise<MoneyHarness> {
       await payments.close();
       await close();
       await mail.close();
+      await s3.close();
       await dataSource.destroy();
     },
   };
