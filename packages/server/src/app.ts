@@ -31,6 +31,7 @@ import { projectsRouter } from "./projects/projects.router.js";
 import { createProjectsService, type EmptyPlanFactory } from "./projects/projects.service.js";
 import { createMeasurementsModule, type MeasurementsModuleOptions } from "./measurements/measurements.module.js";
 import { createMoneyModule, type MoneyModuleOptions } from "./money/money.module.js";
+import { createUnderlaysModule, type UnderlaysModuleOptions } from "./underlays/underlays.module.js";
 
 export { loadConfig, type AppConfig } from "./config.js";
 export { createDataSource } from "./data-source.js";
@@ -49,6 +50,7 @@ export interface AppDeps {
   analysisPool?: AnalysisPool;
   measurements?: MeasurementsModuleOptions;
   money?: MoneyModuleOptions;
+  underlays?: UnderlaysModuleOptions;
 }
 
 const PLAN_PUT = /^\/v1\/projects\/[^/]+\/plan$/;
@@ -107,6 +109,7 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
   const catalogue = createCatalogueService(dataSource);
   const analyses = createAnalysesService(dataSource, projects, catalogue, pool);
   const media = createMeasurementsModule({ dataSource, config, logger, projects, options: deps.measurements });
+  const underlays = createUnderlaysModule({ dataSource, config, projects, storage: deps.measurements?.storage, options: deps.underlays });
   const money = createMoneyModule({ dataSource, config, logger, mailer, projects, catalogue, sessions, options: deps.money });
   money.mountWebhook(beforeJson);
   const perAddress = deps.accountLimitPerAddress ?? 30;
@@ -122,7 +125,7 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
     }),
   );
   api.use(peopleRouter(people, sessions, addressLimiter(dataSource, "accept", 15 * 60_000, perAddress)));
-  api.use(projectsRouter(projects, sessions, [...planRoutes(plans), ...analysisRoutes(analyses), ...media.routes, ...money.projectRoutes]));
+  api.use(projectsRouter(projects, sessions, [...planRoutes(plans), ...analysisRoutes(analyses), ...media.routes, ...underlays.routes, ...money.projectRoutes]));
   api.use(catalogueRouter(catalogue, sessions));
   api.use(auditRouter(dataSource, sessions));
   for (const r of money.routers) api.use(r);
@@ -136,6 +139,7 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
     mailer.close();
     if (!deps.analysisPool) await pool.close();
     await media.close();
+    underlays.close();
     await money.close();
   };
   return { app, mailer, close };

@@ -17,6 +17,7 @@ import { StoredFile } from "../files/stored-file.entity.js";
 import { Measurement } from "../measurements/measurement.entity.js";
 import { Photo } from "../measurements/photo.entity.js";
 import { moneyEntities } from "../money/entities.js";
+import { UnderlayFile } from "../underlays/underlay-file.entity.js";
 
 export {
   AnalysisCache, AuditEvent, FirmConstruction, Invitation, Membership, Organization, PasswordReset, Plan, PlanRevision, Project, ProjectClient, RateLimitBucket, Session, User,
@@ -25,5 +26,5 @@ export {
 /** Every entity, for the DataSource. */
 export const entities = [
   Organization, User, Membership, Project, ProjectClient, Plan, PlanRevision, AuditEvent, Session, Invitation, PasswordReset, RateLimitBucket,
-  AnalysisCache, FirmConstruction, ProjectBrief, StoredFile, Measurement, Photo, ...moneyEntities,
+  AnalysisCache, FirmConstruction, ProjectBrief, StoredFile, Measurement, Photo, UnderlayFile, ...moneyEntities,
 ];
