@@ -1,0 +1,85 @@
+import { spawn, type ChildProcess } from "node:child_process";
+import { createServer } from "node:net";
+import { fileURLToPath } from "node:url";
+
+const serverDir = fileURLToPath(new URL("../..", import.meta.url));
+
+export const freePort = () =>
+  new Promise<number>((resolve) => {
+    const s = createServer();
+    s.listen(0, "127.0.0.1", () => {
+      const a = s.address();
+      s.close(() => resolve(typeof a === "object" && a ? a.port : 0));
+    });
+  });
+
+export interface ServerProcess {
+  base: string;
+  child: ChildProcess;
+  /** Everything the process wrote (its log lines), for a failure message. */
+  output: () => string;
+  /** Resolves with the exit code or signal once the process has ended. */
+  exited: Promise<string>;
+  /** Sends a signal (SIGKILL by default) and waits for the process to end. */
+  kill: (signal?: NodeJS.Signals) => Promise<string>;
+}
+
+/** Starts `node dist/index.js` (the built server) with `env` on a free port and waits until it answers. */
+export async function startServerProcess(env: Record<string, string>, port?: number): Promise<ServerProcess> {
+  const p = port ?? (await freePort());
+  const child = spawn("node", ["dist/index.js"], {
+    cwd: serverDir,
+    env: { ...process.env, NODE_ENV: "test", HUSHMARK_PORT: String(p), HUSHMARK_LOG_LEVEL: "warn", ...env },
+    stdio: ["ignore", "pipe", "pipe"],
+  });
+  let log = "";
+  child.stdout!.on("data", (d: Buffer) => (log = (log + d.toString()).slice(-20_000)));
+  child.stderr!.on("data", (d: Buffer) => (log = (log + d.toString()).slice(-20_000)));
+  const exited = new Promise<string>((resolve) => child.on("exit", (code, signal) => resolve(signal ?? String(code))));
+  const base = `http://127.0.0.1:${p}`;
+  const proc: ServerProcess = {
+    base,
+    child,
+    output: () => log,
+    exited,
+    kill: async (signal = "SIGKILL") => {
+      if (child.exitCode === null && child.signalCode === null) child.kill(signal);
+      return exited;
+    },
+  };
+  const started = Date.now();
+  while (Date.now() - started < 30_000) {
+    if (child.exitCode !== null) throw new Error(`the server exited at start-up:\n${log}`);
+    if (await fetch(`${base}/api/v1/health`).then((r) => r.ok, () => false)) return proc;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  await proc.kill();
+  throw new Error(`the server did not answer within 30 s:\n${log}`);
+}
+
+/** A cookie-keeping JSON client for one person (a browser without the browser). */
+export function person(base: () => string) {
+  const cookies = new Map<string, string>();
+  return async function call(method: string, path: string, body?: unknown): Promise<{ status: number; body: any }> {
+    const res = await fetch(`${base()}${path}`, {
+      method,
+      headers: { "content-type": "application/json", cookie: [...cookies].map(([k, v]) => `${k}=${v}`).join("; ") },
+      ...(body === undefined ? {} : { body: JSON.stringify(body) }),
+      signal: AbortSignal.timeout(15_000),
+    });
+    for (const c of res.headers.getSetCookie()) {
+      const [pair] = c.split(";");
+      const [k, v] = pair!.split("=");
+      if (v) cookies.set(k!, v);
+      else cookies.delete(k!);
+    }
+    const text = await res.text();
+    let parsed: unknown = null;
+    try {
+      parsed = text ? JSON.parse(text) : null;
+    } catch {
+      parsed = text;
+    }
+    return { status: res.status, body: parsed };
+  };
+}
