@@ -151,7 +151,7 @@ export { strongestPaths } from "./network/paths.js";
 export type { RankedPath } from "./network/paths.js";
 export { linkShares } from "./network/shares.js";
 export type { LinkShare } from "./network/shares.js";
-export { solveNetwork, solveBase, networkWarnings } from "./network/solve.js";
+export { solveNetwork, solveCompiled, solveBase, networkWarnings } from "./network/solve.js";
 export type { SolveRequest, SolveResult, PathResult, LinkResult, SolvedNetwork } from "./network/solve.js";
 export { targetSchema, shortfall, ncExcessDb } from "./network/targets.js";
 export type { Target, Shortfall } from "./network/targets.js";

@@ -77,8 +77,8 @@ export { seededRandom } from "./synthetic/random.js";
 export { constructionFromCsv, measurementFromCsv, bandTableFromCsv, REQUIRED_LAB_BANDS_HZ } from "./catalogue/csv.js";
 export type { CsvProblem, CsvResult } from "./catalogue/csv.js";
 export { constructionRatings, coveringDeltaLwDb } from "./catalogue/ratings.js";
-export { solvePlan } from "./analysis/analyse.js";
-export type { SolvePlanRequest, SolvePlanResult } from "./analysis/analyse.js";
+export { ANALYSIS_REQUEST_PROBLEM, engineTargetOf, preparePlanNetwork, solvePlan } from "./analysis/analyse.js";
+export type { AnalysisSource, PreparedPlanNetwork, SolvePlanRequest, SolvePlanResult } from "./analysis/analyse.js";
 export { emptyPlan } from "./document/empty-plan.js";
 
 // Exchange: DXF import

@@ -139,7 +139,15 @@ function gainsFor(s: SolvedNetwork, links: readonly number[]): Map<number, { a: 
 
 /** Solve a parsed network for a source and a receiver (see docs/acoustics-model.md). */
 export function solveNetwork(network: Network, request: SolveRequest): SolveResult {
-  const c = compileNetwork(network);
+  return solveCompiled(compileNetwork(network), request).result;
+}
+
+/**
+ * The same for a compiled network, also handing back the solved base state, so a caller that
+ * evaluates further changes (exact gains of parts of a link) re-uses the forward and adjoint
+ * solves instead of repeating them.
+ */
+export function solveCompiled(c: CompiledNetwork, request: SolveRequest): { result: SolveResult; solved: SolvedNetwork } {
   const s = solveBase(c, request);
   const { ex, base, aWeights } = s;
   const B = c.B;
@@ -151,7 +159,7 @@ export function solveNetwork(network: Network, request: SolveRequest): SolveResu
   const shares = linkShares(c, ex, base.e, base.z, r, aWeights);
   const top = shares.slice(0, request.gains ?? 20).filter((sh) => sh.aWeighted > 0).map((sh) => sh.link);
   const gains = gainsFor(s, top);
-  return {
+  const result: SolveResult = {
     bands: c.bands,
     frequenciesHz: bandSet(c.bands).nominalHz,
     receiver: request.receiver,
@@ -189,4 +197,5 @@ export function solveNetwork(network: Network, request: SolveRequest): SolveResu
     warnings: networkWarnings(c),
     solver: { forward: s.forward, adjoint: s.adjoint, pathExpansions: found.expansions },
   };
+  return { result, solved: s };
 }

@@ -1,4 +1,4 @@
-import { compileNetwork, PerturbationEvaluator, solveBase, type Network } from "@hushmark/acoustics";
+import { PerturbationEvaluator, type Network, type SolvedNetwork } from "@hushmark/acoustics";
 
 type NetworkPart = Extract<Network["links"][number], { type: "partition" }>["parts"][number];
 
@@ -13,17 +13,12 @@ function partTauS(part: NetworkPart, b: number): number {
 /**
  * Exact gain-if-perfect in dB(A) of plan elements that are only some of a wall link's parts (a
  * door and its gaps, a penetration): the engine's perturbation evaluator re-solves the receiver
- * with those parts' τ·S taken out of the link, warm-started from one base solve.
+ * with those parts' τ·S taken out of the link, warm-started from the analysis's own base solve.
  */
-export function exactPartGainsDb(
-  network: Network,
-  request: { source?: string; receiver: string },
-  elements: ReadonlyArray<{ elementId: string; linkId: string }>,
-): Map<string, number> {
+export function exactPartGainsDb(solved: SolvedNetwork, elements: ReadonlyArray<{ elementId: string; linkId: string }>): Map<string, number> {
   const out = new Map<string, number>();
   if (elements.length === 0) return out;
-  const c = compileNetwork(network);
-  const solved = solveBase(c, request);
+  const { c } = solved;
   const evaluator = new PerturbationEvaluator(solved.base);
   const B = c.B;
   const r = solved.base.receiver;
@@ -35,7 +30,7 @@ export function exactPartGainsDb(
   const before = aSum(solved.base.e.subarray(r * B, r * B + B));
   for (const { elementId, linkId } of elements) {
     const l = c.linkIndex.get(linkId);
-    const link = network.links.find((x) => x.id === linkId);
+    const link = l === undefined ? undefined : c.network.links[l];
     if (l === undefined || !link || link.type !== "partition") continue;
     const parts = link.parts.filter((p) => p.ref === elementId);
     const weight = new Float64Array(B);

@@ -1,4 +1,4 @@
-import { NETWORK_FORMAT, NETWORK_FORMAT_VERSION, type NetworkInput } from "@hushmark/acoustics";
+import { NETWORK_FORMAT, NETWORK_FORMAT_VERSION, type Network } from "@hushmark/acoustics";
 import type { Catalogue } from "../catalogue/types.js";
 import type { Plan } from "../document/schema.js";
 import { planWallPieces } from "../geometry/walls.js";
@@ -38,6 +38,8 @@ export function buildNetwork(plan: Plan, catalogue: Catalogue, options: BuildOpt
     for (const end of l.between) {
       const acc = outM2.get(end) ?? new Array<number>(BAND_COUNT).fill(0);
       const tauS = linkTauSM2(l);
+      // The network skips the schema pass, so a non-finite number from odd geometry is caught here.
+      if (!tauS.every(Number.isFinite)) throw new Error(`builder produced a link with a non-finite transmitting area: ${l.id}`);
       for (let b = 0; b < BAND_COUNT; b++) acc[b]! += tauS[b]!;
       outM2.set(end, acc);
     }
@@ -61,6 +63,6 @@ export function buildNetwork(plan: Plan, catalogue: Catalogue, options: BuildOpt
       }
     }
   }
-  const network: NetworkInput = { format: NETWORK_FORMAT, version: NETWORK_FORMAT_VERSION, bands: "third-octave", name: plan.name, spaces, links, sources };
+  const network: Network = { format: NETWORK_FORMAT, version: NETWORK_FORMAT_VERSION, bands: "third-octave", name: plan.name, spaces, links, sources };
   return { ok: true, network, links: traces, spaces: spaceTraces, assumptions };
 }

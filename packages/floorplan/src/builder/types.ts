@@ -1,4 +1,4 @@
-import type { NetworkInput } from "@hushmark/acoustics";
+import type { Network } from "@hushmark/acoustics";
 import type { Point } from "../document/schema.js";
 import type { Problem } from "../validation/problem.js";
 
@@ -24,9 +24,11 @@ export interface SpaceTrace {
   centre: Point | null;
 }
 
-export type NetworkSourceInput = NonNullable<NetworkInput["sources"]>[number];
-export type LinkInput = NonNullable<NetworkInput["links"]>[number];
-export type SpaceInput = NetworkInput["spaces"][number];
+// The builder writes the engine's parsed shape (every defaulted field set), so its network goes to
+// the solver without a schema pass; tests check that parsing it changes nothing.
+export type NetworkSourceInput = Network["sources"][number];
+export type LinkInput = Network["links"][number];
+export type SpaceInput = Network["spaces"][number];
 
 export interface BuildOptions {
   /** Add simplified ISO 12354-1 flanking paths at wall junctions (default true). */
@@ -38,5 +40,5 @@ export interface BuildOptions {
 }
 
 export type BuildResult =
-  | { ok: true; network: NetworkInput; links: Record<string, LinkTrace>; spaces: Record<string, SpaceTrace>; assumptions: Problem[] }
+  | { ok: true; network: Network; links: Record<string, LinkTrace>; spaces: Record<string, SpaceTrace>; assumptions: Problem[] }
   | { ok: false; problems: Problem[] };
