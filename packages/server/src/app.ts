@@ -110,7 +110,7 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
   const analyses = createAnalysesService(dataSource, projects, catalogue, pool);
   const media = createMeasurementsModule({ dataSource, config, logger, projects, options: deps.measurements });
   const underlays = createUnderlaysModule({ dataSource, config, projects, storage: deps.measurements?.storage, options: deps.underlays });
-  const money = createMoneyModule({ dataSource, config, logger, mailer, projects, catalogue, sessions, options: deps.money });
+  const money = createMoneyModule({ dataSource, config, logger, mailer, projects, catalogue, sessions, files: media.files, options: deps.money });
   money.mountWebhook(beforeJson);
   const perAddress = deps.accountLimitPerAddress ?? 30;
 

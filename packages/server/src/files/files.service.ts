@@ -1,6 +1,6 @@
-import { randomUUID } from "node:crypto";
+import { createHash, randomUUID } from "node:crypto";
 import { createReadStream } from "node:fs";
-import type { Readable } from "node:stream";
+import { Readable } from "node:stream";
 import type { DataSource, EntityManager } from "typeorm";
 import type { Actor } from "../auth/actor.js";
 import { storageUnavailable, type ObjectStorage } from "./object-storage.js";
@@ -15,13 +15,16 @@ export interface FileSource {
   open: () => Readable;
 }
 
+/** Who a file is stored for: a signed-in person, or the firm itself for files a background job makes. */
+export type FileOwner = Pick<Actor, "organizationId"> & { userId: string | null };
+
 /** Files of a project in object storage, recorded in `stored_files`; nothing is left half-saved. */
 export function createFilesService(dataSource: DataSource, storage: ObjectStorage) {
   /**
    * Stores the bytes and then the record, in that order, and answers the record. If the store
    * refuses, no record remains; if the record cannot be written, the object is removed again.
    */
-  async function store(actor: Actor, projectId: string, source: FileSource): Promise<StoredFile> {
+  async function store(actor: FileOwner, projectId: string, source: FileSource): Promise<StoredFile> {
     const id = randomUUID();
     const objectKey = `projects/${projectId}/files/${id}`;
     const repo = dataSource.getRepository(StoredFile);
@@ -46,6 +49,11 @@ export function createFilesService(dataSource: DataSource, storage: ObjectStorag
   }
 
   const fromDisk = (path: string, meta: Omit<FileSource, "open">): FileSource => ({ ...meta, open: () => createReadStream(path) });
+
+  /** Bytes made by the server itself (a rendered PDF), with their size and digest. */
+  const fromBuffer = (bytes: Buffer, meta: Pick<FileSource, "contentType" | "originalName">): FileSource => ({
+    ...meta, sizeBytes: bytes.length, sha256: createHash("sha256").update(bytes).digest("hex"), open: () => Readable.from([bytes]),
+  });
 
   /** Removes a file's record (inside the caller's transaction) and then its object. */
   async function remove(manager: EntityManager, file: StoredFile): Promise<() => Promise<void>> {
@@ -75,7 +83,7 @@ export function createFilesService(dataSource: DataSource, storage: ObjectStorag
     return stale.length;
   }
 
-  return { store, fromDisk, remove, open, sweepUnfinished };
+  return { store, fromDisk, fromBuffer, remove, open, sweepUnfinished };
 }
 
 export type FilesService = ReturnType<typeof createFilesService>;

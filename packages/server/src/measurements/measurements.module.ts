@@ -1,7 +1,7 @@
 import type { Logger } from "pino";
 import type { DataSource } from "typeorm";
 import type { AppConfig } from "../config.js";
-import { createFilesService } from "../files/files.service.js";
+import { createFilesService, type FilesService } from "../files/files.service.js";
 import { createObjectStorage, type ObjectStorage } from "../files/object-storage.js";
 import type { RouteSpec } from "../http/routes.js";
 import { createIntakeService } from "../intake/intake.service.js";
@@ -22,7 +22,7 @@ export interface MeasurementsModuleOptions {
  * The brief, measurements, recordings and photos: their routes (under `/projects`), the object
  * store and the job queue that analyses recordings. `close` stops the queue and the store client.
  */
-export function createMeasurementsModule(deps: { dataSource: DataSource; config: AppConfig; logger: Logger; projects: ProjectsService; options?: MeasurementsModuleOptions }): { routes: RouteSpec[]; jobs: JobQueue; close: () => Promise<void> } {
+export function createMeasurementsModule(deps: { dataSource: DataSource; config: AppConfig; logger: Logger; projects: ProjectsService; options?: MeasurementsModuleOptions }): { routes: RouteSpec[]; jobs: JobQueue; files: FilesService; close: () => Promise<void> } {
   const { dataSource, config, logger, projects } = deps;
   const storage = deps.options?.storage ?? createObjectStorage(config.s3);
   const files = createFilesService(dataSource, storage);
@@ -35,6 +35,7 @@ export function createMeasurementsModule(deps: { dataSource: DataSource; config:
   return {
     routes,
     jobs,
+    files,
     close: async () => {
       await jobs.stop();
       if (!deps.options?.storage) storage.close();

@@ -5,6 +5,7 @@ import type Stripe from "stripe";
 import type { Sessions } from "../auth/sessions.js";
 import type { CatalogueService } from "../catalogue/catalogue.service.js";
 import type { AppConfig } from "../config.js";
+import type { FilesService } from "../files/files.service.js";
 import type { RouteSpec } from "../http/routes.js";
 import { createJobQueue, type QueueSpec } from "../jobs/job-queue.js";
 import type { Mailer } from "../mail/mailer.js";
@@ -39,18 +40,18 @@ function searchOptions(config: AppConfig, given: SearchRegistryOptions | undefin
  * From diagnosis to paid work: price book, scenarios and option searches, proposals with their
  * PDFs (a background job), deposits through the payment service, work orders and verification.
  */
-export function createMoneyModule(deps: { dataSource: DataSource; config: AppConfig; logger: Logger; mailer: Mailer; projects: ProjectsService; catalogue: CatalogueService; sessions: Sessions; options?: MoneyModuleOptions | undefined }) {
-  const { dataSource, config, logger, mailer, projects, catalogue, sessions } = deps;
+export function createMoneyModule(deps: { dataSource: DataSource; config: AppConfig; logger: Logger; mailer: Mailer; projects: ProjectsService; catalogue: CatalogueService; sessions: Sessions; files: FilesService; options?: MoneyModuleOptions | undefined }) {
+  const { dataSource, config, logger, mailer, projects, catalogue, sessions, files } = deps;
   const paymentsConfig = deps.options?.payments ?? loadPaymentsConfig({ ...process.env, NODE_ENV: config.env });
   const stripe = deps.options?.stripe ?? createStripe(paymentsConfig);
   const priceBook = createPriceBookService(dataSource);
   const searches = createSearchRegistry(dataSource, searchOptions(config, deps.options?.searches));
   const scenarios = createScenariosService(dataSource, projects, catalogue, priceBook, searches);
-  const jobs = createJobQueue({ databaseUrl: config.databaseUrl, schema: config.jobsSchema, logger, queues: [proposalPdfQueue(dataSource, catalogue, logger) as QueueSpec<never>] });
+  const jobs = createJobQueue({ databaseUrl: config.databaseUrl, schema: config.jobsSchema, logger, queues: [proposalPdfQueue(dataSource, catalogue, files, logger) as QueueSpec<never>] });
   let proposals: ProposalsService;
-  const workOrders = createWorkOrdersService(dataSource, { projects, proposals: () => proposals });
+  const workOrders = createWorkOrdersService(dataSource, { projects, proposals: () => proposals, files });
   proposals = createProposalsService(dataSource, {
-    projects, scenarios, priceBook, mailer, publicUrl: config.publicUrl,
+    projects, scenarios, priceBook, mailer, files, publicUrl: config.publicUrl,
     hooks: {
       renderPdf: async (proposalId, version) => {
         await jobs.send(PROPOSAL_PDF_QUEUE, { proposalId, version });

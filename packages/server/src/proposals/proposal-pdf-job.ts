@@ -2,6 +2,7 @@ import type { Logger } from "pino";
 import type { DataSource } from "typeorm";
 import { proposalContentSchema, scenarioSetupSchema, type PriceBookItem } from "@hushmark/schemas";
 import type { CatalogueService } from "../catalogue/catalogue.service.js";
+import type { FilesService } from "../files/files.service.js";
 import type { QueueSpec } from "../jobs/job-queue.js";
 import { PriceBookItem as PriceBookItemRow } from "../price-book/price-book-item.entity.js";
 import { itemDto } from "../price-book/price-book.service.js";
@@ -18,12 +19,17 @@ export interface ProposalPdfJob {
   version: number;
 }
 
-/** Renders one proposal version to PDF and keeps it with the version. */
-export async function renderProposalVersion(dataSource: DataSource, catalogues: CatalogueService, job: ProposalPdfJob): Promise<void> {
+/**
+ * Renders one proposal version to PDF and stores it in object storage. Safe to run again: a
+ * version that has its PDF is left alone, and of two runs racing only the first to record its
+ * file keeps it (the other removes its own object). The record is only taken while the version
+ * still holds the content that was drawn, so a render of content revised meanwhile is dropped.
+ */
+export async function renderProposalVersion(dataSource: DataSource, catalogues: CatalogueService, files: FilesService, job: ProposalPdfJob): Promise<void> {
   const versions = dataSource.getRepository(ProposalVersionRow);
   const v = await versions.findOne({ where: { proposalId: job.proposalId, version: job.version } });
   const proposal = await dataSource.getRepository(ProposalRow).findOne({ where: { id: job.proposalId } });
-  if (!v || !proposal) return;
+  if (!v || !proposal || v.pdfFileId) return;
   const content = proposalContentSchema.parse(v.content);
   const setup = scenarioSetupSchema.parse(v.scenarioSnapshot.setup);
   const { catalogue } = await catalogues.catalogueFor(proposal.organizationId);
@@ -41,10 +47,20 @@ export async function renderProposalVersion(dataSource: DataSource, catalogues: 
   const before = prepared ? elementShares(prepared, setup.receiverId) : new Map<string, number>();
   const after = prepared && built.ok ? elementShares(prepared, setup.receiverId, built.value.planner.prepared.map((p) => p.option)) : new Map<string, number>();
   const pdf = await renderProposalPdf({ content, version: job.version, prepared, receiverId: setup.receiverId, sharesBefore: before, sharesAfter: after, markers });
-  await versions.update({ proposalId: job.proposalId, version: job.version }, { pdf, pdfStatus: "ready", pdfError: null });
+  const file = await files.store({ organizationId: proposal.organizationId, userId: null }, proposal.projectId, files.fromBuffer(pdf, { contentType: "application/pdf", originalName: `proposal-${proposal.id.slice(0, 8)}-v${job.version}.pdf` }));
+  const taken = await versions
+    .createQueryBuilder()
+    .update()
+    .set({ pdfFileId: file.id, pdfStatus: "ready", pdfError: null })
+    .where("proposal_id = :id AND version = :version AND pdf_file_id IS NULL AND content = CAST(:content AS jsonb)", { id: job.proposalId, version: job.version, content: JSON.stringify(v.content) })
+    .execute();
+  if (taken.affected === 0) {
+    const undo = await dataSource.transaction((m) => files.remove(m, file));
+    await undo();
+  }
 }
 
-export function proposalPdfQueue(dataSource: DataSource, catalogues: CatalogueService, logger: Logger): QueueSpec<ProposalPdfJob> {
+export function proposalPdfQueue(dataSource: DataSource, catalogues: CatalogueService, files: FilesService, logger: Logger): QueueSpec<ProposalPdfJob> {
   return {
     name: PROPOSAL_PDF_QUEUE,
     retryLimit: 3,
@@ -52,7 +68,7 @@ export function proposalPdfQueue(dataSource: DataSource, catalogues: CatalogueSe
     expireInSeconds: 120,
     handler: async (job) => {
       try {
-        await renderProposalVersion(dataSource, catalogues, job.data);
+        await renderProposalVersion(dataSource, catalogues, files, job.data);
       } catch (e) {
         logger.error({ err: e, job: job.data }, "proposal PDF failed");
         if (job.retryCount >= job.retryLimit) {

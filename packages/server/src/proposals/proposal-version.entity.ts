@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryColumn } from "typeorm";
+import { StoredFile } from "../files/stored-file.entity.js";
 import { ProposalRow } from "./proposal.entity.js";
 
 /** One version of a proposal: a frozen copy of what the client reads, and its PDF once rendered. */
@@ -34,8 +35,13 @@ export class ProposalVersionRow {
   @Column({ type: "varchar", length: 10, name: "pdf_status", default: "pending" })
   pdfStatus!: string;
 
-  @Column({ type: "bytea", name: "pdf", nullable: true, select: false })
-  pdf!: Buffer | null;
+  /** The rendered PDF in object storage (a `stored_files` record), once the job has made it. */
+  @Column({ type: "uuid", name: "pdf_file_id", nullable: true })
+  pdfFileId!: string | null;
+
+  @ManyToOne(() => StoredFile, { onDelete: "SET NULL" })
+  @JoinColumn({ name: "pdf_file_id" })
+  pdfFile?: StoredFile;
 
   @Column({ type: "text", name: "pdf_error", nullable: true })
   pdfError!: string | null;

@@ -1,3 +1,4 @@
+import { pipeline } from "node:stream/promises";
 import { Router } from "express";
 import {
   depositStartSchema, projectIdParamSchema, proposalChangesSchema, proposalCommentInputSchema, proposalCreateSchema, proposalDecisionSchema,
@@ -48,8 +49,9 @@ export function proposalsRouter(proposals: ProposalsService, payments: PaymentsS
       method: "get", path: "/:proposalId/versions/:version/pdf", access: READERS,
       handler: async ({ req, res, actor }) => {
         const p = parse(proposalVersionParamSchema, req.params);
-        const { bytes, filename } = await proposals.pdf(actor, p.proposalId, p.version);
-        res.type("application/pdf").attachment(filename).send(bytes);
+        const file = await proposals.pdf(actor, p.proposalId, p.version);
+        res.type("application/pdf").attachment(file.filename).set({ "content-length": String(file.sizeBytes), "x-content-type-options": "nosniff" });
+        await pipeline(file.body, res);
         return undefined;
       },
     },

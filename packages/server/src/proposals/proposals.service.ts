@@ -1,8 +1,11 @@
+import type { Readable } from "node:stream";
 import type { DataSource, EntityManager } from "typeorm";
 import { proposalContentSchema, STAFF_ROLES, type Proposal, type ProposalContent, type ProposalStatus, type ScenarioSetup } from "@hushmark/schemas";
 import type { Actor } from "../auth/actor.js";
 import { recordAudit } from "../audit/audit.js";
 import { HttpError, conflict, notFound } from "../http/errors.js";
+import type { FilesService } from "../files/files.service.js";
+import { StoredFile } from "../files/stored-file.entity.js";
 import { linkMail, type Mailer } from "../mail/mailer.js";
 import type { PriceBookService } from "../price-book/price-book.service.js";
 import type { ProjectsService } from "../projects/projects.service.js";
@@ -24,7 +27,7 @@ export interface ProposalHooks {
 const isStaff = (actor: Actor) => STAFF_ROLES.includes(actor.role);
 
 /** Proposals: versions frozen when sent, the client's comments and decision, and what the firm and the client see of them. */
-export function createProposalsService(dataSource: DataSource, deps: { projects: ProjectsService; scenarios: ScenariosService; priceBook: PriceBookService; mailer: Mailer; publicUrl: string; hooks: ProposalHooks }) {
+export function createProposalsService(dataSource: DataSource, deps: { projects: ProjectsService; scenarios: ScenariosService; priceBook: PriceBookService; mailer: Mailer; files: FilesService; publicUrl: string; hooks: ProposalHooks }) {
   const proposals = dataSource.getRepository(ProposalRow);
   const versions = dataSource.getRepository(ProposalVersionRow);
   const comments = dataSource.getRepository(ProposalCommentRow);
@@ -120,15 +123,20 @@ export function createProposalsService(dataSource: DataSource, deps: { projects:
     const scenarioId = patch.scenarioId ?? row.scenarioId;
     const made = await contentFor(actor, row.projectId, scenarioId, patch.title ?? old.title, patch.note ?? old.note, patch.validUntil ?? (patch.scenarioId ? undefined : old.validUntil));
     const next = current.sentAt ? row.currentVersion + 1 : row.currentVersion;
+    let dropOldPdf: (() => Promise<void>) | null = null;
     await dataSource.transaction(async (m) => {
       if (current.sentAt) {
         await m.getRepository(ProposalVersionRow).insert({ proposalId: id, version: next, content: made.content as never, planDocument: made.planDocument as never, scenarioSnapshot: made.snapshot as never });
       } else {
-        await m.getRepository(ProposalVersionRow).update({ proposalId: id, version: next }, { content: made.content as never, planDocument: made.planDocument as never, scenarioSnapshot: made.snapshot as never, pdfStatus: "pending", pdfError: null });
+        await m.getRepository(ProposalVersionRow).update({ proposalId: id, version: next }, { content: made.content as never, planDocument: made.planDocument as never, scenarioSnapshot: made.snapshot as never, pdfStatus: "pending", pdfError: null, pdfFileId: null });
+        // The unsent version's old PDF shows content that is gone; its object goes once this commits.
+        const old = current.pdfFileId ? await m.getRepository(StoredFile).findOneBy({ id: current.pdfFileId }) : null;
+        if (old) dropOldPdf = await deps.files.remove(m, old);
       }
       await m.getRepository(ProposalRow).update({ id }, { currentVersion: next, scenarioId, status: "draft" });
       await recordAudit(m, { organizationId: actor.organizationId, actorUserId: actor.userId, action: "proposal.changed", entityType: "proposal", entityId: id, data: { version: next } });
     });
+    await (dropOldPdf as (() => Promise<void>) | null)?.();
     await hooks.renderPdf(id, next);
     return dto(await proposals.findOneByOrFail({ id }), next, actor);
   }
@@ -191,14 +199,15 @@ export function createProposalsService(dataSource: DataSource, deps: { projects:
     return dto(row, version, actor);
   }
 
-  async function pdf(actor: Actor, id: string, version: number): Promise<{ bytes: Buffer; filename: string }> {
+  /** The version's PDF as a stream from object storage. */
+  async function pdf(actor: Actor, id: string, version: number): Promise<{ body: Readable; sizeBytes: number; filename: string }> {
     const { row, version: visibleVersion } = await visible(actor, id);
     if (version > visibleVersion) throw notFound(`Version ${version} of this proposal`);
-    const v = await versions.createQueryBuilder("v").addSelect("v.pdf").where("v.proposal_id = :id AND v.version = :version", { id, version }).getOne();
+    const v = await versions.findOne({ where: { proposalId: id, version }, relations: { pdfFile: true } });
     if (!v || (!isStaff(actor) && !v.sentAt)) throw notFound(`Version ${version} of this proposal`);
     if (v.pdfStatus === "failed") throw new HttpError(409, "pdf_failed", `The PDF could not be made: ${v.pdfError ?? "unknown reason"}. Change the proposal to try again.`);
-    if (v.pdfStatus !== "ready" || !v.pdf) throw new HttpError(409, "pdf_pending", "The PDF is still being made; try again in a few seconds.", undefined, { "Retry-After": "3" });
-    return { bytes: v.pdf, filename: `proposal-${row.id.slice(0, 8)}-v${version}.pdf` };
+    if (v.pdfStatus !== "ready" || !v.pdfFile) throw new HttpError(409, "pdf_pending", "The PDF is still being made; try again in a few seconds.", undefined, { "Retry-After": "3" });
+    return { body: await deps.files.open(v.pdfFile), sizeBytes: v.pdfFile.sizeBytes, filename: `proposal-${row.id.slice(0, 8)}-v${version}.pdf` };
   }
 
   return { create, list, get, update, send, comment, decide, pdf, visible, portalUrl };

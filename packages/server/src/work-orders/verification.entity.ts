@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from "typeorm";
+import { StoredFile } from "../files/stored-file.entity.js";
 import { ProposalRow } from "../proposals/proposal.entity.js";
 
 /** Measured levels before and after the work at the receiver, kept with the proposal's prediction. */
@@ -29,6 +30,14 @@ export class VerificationRow {
 
   @Column({ type: "text", name: "note", default: "" })
   note!: string;
+
+  /** The closing report in object storage, made on its first download (a verification does not change). */
+  @Column({ type: "uuid", name: "report_file_id", nullable: true })
+  reportFileId!: string | null;
+
+  @ManyToOne(() => StoredFile, { onDelete: "SET NULL" })
+  @JoinColumn({ name: "report_file_id" })
+  reportFile?: StoredFile;
 
   @Column({ type: "uuid", name: "created_by" })
   createdById!: string;

@@ -1,10 +1,9 @@
+import { pipeline } from "node:stream/promises";
 import { Router } from "express";
 import { projectIdParamSchema, taskParamSchema, taskUpdateSchema, verificationInputSchema, verificationParamSchema } from "@hushmark/schemas";
 import type { Sessions } from "../auth/sessions.js";
-import { notFound } from "../http/errors.js";
 import { parse } from "../http/parse.js";
 import { mountRoutes, type RouteSpec } from "../http/routes.js";
-import { renderClosingReport } from "./closing-report-pdf.js";
 import type { WorkOrdersService } from "./work-orders.service.js";
 
 const STAFF = ["owner", "planner", "surveyor"] as const;
@@ -22,9 +21,9 @@ export function workOrderProjectRoutes(workOrders: WorkOrdersService): RouteSpec
       handler: async ({ req, res, actor }) => {
         const projectId = project(req.params);
         const { verificationId } = parse(verificationParamSchema, { verificationId: req.params.verificationId });
-        const found = (await workOrders.verifications(actor, projectId)).find((v) => v.row.id === verificationId);
-        if (!found) throw notFound("That verification");
-        res.type("application/pdf").attachment(`closing-report-${verificationId.slice(0, 8)}.pdf`).send(await renderClosingReport(found.dto, found.content));
+        const report = await workOrders.closingReport(actor, projectId, verificationId);
+        res.type("application/pdf").attachment(report.filename).set({ "content-length": String(report.sizeBytes), "x-content-type-options": "nosniff" });
+        await pipeline(report.body, res);
         return undefined;
       },
     },

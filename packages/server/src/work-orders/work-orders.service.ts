@@ -1,15 +1,19 @@
 import { aWeightedLevelDb, ratingNc, spectrum } from "@hushmark/acoustics";
+import type { Readable } from "node:stream";
 import type { DataSource, EntityManager } from "typeorm";
 import { In } from "typeorm";
 import { proposalContentSchema, type ProposalContent, type Verification, type WorkOrder } from "@hushmark/schemas";
 import type { Actor } from "../auth/actor.js";
 import { recordAudit } from "../audit/audit.js";
+import type { FilesService } from "../files/files.service.js";
+import { StoredFile } from "../files/stored-file.entity.js";
 import { HttpError, conflict, notFound } from "../http/errors.js";
 import { PriceBookItem as PriceBookItemRow } from "../price-book/price-book-item.entity.js";
 import type { ProjectsService } from "../projects/projects.service.js";
 import type { ProposalsService } from "../proposals/proposals.service.js";
 import { ProposalVersionRow } from "../proposals/proposal-version.entity.js";
 import { ProposalRow } from "../proposals/proposal.entity.js";
+import { renderClosingReport } from "./closing-report-pdf.js";
 import { VerificationRow } from "./verification.entity.js";
 import { workOrderDrafts } from "./work-order-plan.js";
 import { WorkOrderRow, WorkOrderTaskRow } from "./work-order.entity.js";
@@ -22,7 +26,7 @@ function single(levels: number[]): { dba: number; nc: number } {
 }
 
 /** Work orders made on approval, their checklists, and the after-work verification. */
-export function createWorkOrdersService(dataSource: DataSource, deps: { projects: ProjectsService; proposals: () => ProposalsService }) {
+export function createWorkOrdersService(dataSource: DataSource, deps: { projects: ProjectsService; proposals: () => ProposalsService; files: FilesService }) {
   const orders = dataSource.getRepository(WorkOrderRow);
   const tasks = dataSource.getRepository(WorkOrderTaskRow);
 
@@ -126,7 +130,30 @@ export function createWorkOrdersService(dataSource: DataSource, deps: { projects
     return out;
   }
 
-  return { createForApproval, list, updateTask, verify, verifications };
+  /**
+   * The closing report of a verification, streamed from object storage. It is rendered and stored
+   * on its first download (a verification never changes); when two downloads race, the first to
+   * record its file keeps it and the other removes its own object.
+   */
+  async function closingReport(actor: Actor, projectId: string, verificationId: string): Promise<{ body: Readable; sizeBytes: number; filename: string }> {
+    const found = (await verifications(actor, projectId)).find((v) => v.row.id === verificationId);
+    if (!found) throw notFound("That verification");
+    const filename = `closing-report-${verificationId.slice(0, 8)}.pdf`;
+    const files = deps.files;
+    let file = found.row.reportFileId ? await dataSource.getRepository(StoredFile).findOneBy({ id: found.row.reportFileId }) : null;
+    if (!file) {
+      const made = await files.store({ organizationId: found.row.organizationId, userId: null }, projectId, files.fromBuffer(await renderClosingReport(found.dto, found.content), { contentType: "application/pdf", originalName: filename }));
+      const taken = await dataSource.getRepository(VerificationRow).createQueryBuilder().update().set({ reportFileId: made.id }).where("id = :id AND report_file_id IS NULL", { id: verificationId }).execute();
+      if (taken.affected === 0) {
+        await (await dataSource.transaction((m) => files.remove(m, made)))();
+        const again = await dataSource.getRepository(VerificationRow).findOneByOrFail({ id: verificationId });
+        file = await dataSource.getRepository(StoredFile).findOneByOrFail({ id: again.reportFileId ?? "" });
+      } else file = made;
+    }
+    return { body: await files.open(file), sizeBytes: file.sizeBytes, filename };
+  }
+
+  return { createForApproval, list, updateTask, verify, verifications, closingReport };
 }
 
 export type WorkOrdersService = ReturnType<typeof createWorkOrdersService>;
