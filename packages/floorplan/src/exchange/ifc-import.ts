@@ -1,4 +1,4 @@
-import { IfcAPI } from "web-ifc";
+import type { IfcAPI } from "web-ifc";
 import type { Plan } from "../document/schema.js";
 import { convertIfc } from "./ifc-convert.js";
 import { readIfc } from "./ifc-read.js";
@@ -7,9 +7,11 @@ import type { IfcImport, IfcImportOptions, IfcProblem } from "./ifc-types.js";
 /**
  * A ready IFC reader. `locateWasm(file)` says where `web-ifc.wasm` is served (a browser or a
  * worker passes its bundled asset URL; Node finds the file beside the package). Single-threaded,
- * so no cross-origin isolation is needed.
+ * so no cross-origin isolation is needed. web-ifc is loaded here and only here, so code that
+ * merely converts or merges a read model never loads it.
  */
 export async function ifcReader(locateWasm?: (file: string) => string): Promise<IfcAPI> {
+  const { IfcAPI } = await import("web-ifc");
   const api = new IfcAPI();
   await api.Init(locateWasm ? (path: string) => (path.endsWith(".wasm") ? locateWasm(path) : path) : undefined, true);
   return api;

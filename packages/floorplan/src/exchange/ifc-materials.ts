@@ -1,4 +1,4 @@
-import { IFCCONVERSIONBASEDUNIT, IFCMATERIAL, IFCMATERIALLAYERSET, IFCMATERIALLAYERSETUSAGE, IFCMATERIALLIST, IFCSIUNIT } from "web-ifc";
+import { IFC_CODES } from "./ifc-codes.js";
 import type { IfcLayerSet, IfcMaterialLayer } from "./ifc-types.js";
 
 type Line = Record<string, unknown> & { expressID: number; type: number };
@@ -27,14 +27,14 @@ export function lengthUnitOf(assignments: readonly Line[], line: GetLine): { nam
       if (id === undefined) continue;
       const unit = line(id);
       if (text(unit.UnitType) !== "LENGTHUNIT") continue;
-      if (unit.type === IFCSIUNIT) return { name: `${text(unit.Prefix).toLowerCase()}metre`, metres: siMetres(unit) };
-      if (unit.type === IFCCONVERSIONBASEDUNIT) {
+      if (unit.type === IFC_CODES.IFCSIUNIT) return { name: `${text(unit.Prefix).toLowerCase()}metre`, metres: siMetres(unit) };
+      if (unit.type === IFC_CODES.IFCCONVERSIONBASEDUNIT) {
         const factorId = ref(unit.ConversionFactor);
         const factor = factorId !== undefined ? line(factorId) : undefined;
         const value = Number(valueOf(factor?.ValueComponent));
         const baseId = ref(factor?.UnitComponent);
         const base = baseId !== undefined ? line(baseId) : undefined;
-        const metres = value * (base && base.type === IFCSIUNIT ? siMetres(base) : 1);
+        const metres = value * (base && base.type === IFC_CODES.IFCSIUNIT ? siMetres(base) : 1);
         if (Number.isFinite(metres) && metres > 0) return { name: text(unit.Name).toLowerCase() || "converted unit", metres };
       }
     }
@@ -70,19 +70,19 @@ function setFrom(name: string, layers: IfcMaterialLayer[]): IfcLayerSet {
  * a layer set, a list of materials or one material (no thicknesses for the last two), m.
  */
 export function layerSetOf(material: Line, line: GetLine, metres: number): IfcLayerSet | null {
-  if (material.type === IFCMATERIALLAYERSETUSAGE) {
+  if (material.type === IFC_CODES.IFCMATERIALLAYERSETUSAGE) {
     const setId = ref(material.ForLayerSet);
     return setId !== undefined ? layerSetOf(line(setId), line, metres) : null;
   }
-  if (material.type === IFCMATERIALLAYERSET) {
+  if (material.type === IFC_CODES.IFCMATERIALLAYERSET) {
     const layers = layersOf(material, line, metres);
     return layers.length > 0 ? setFrom(text(material.LayerSetName), layers) : null;
   }
-  if (material.type === IFCMATERIALLIST) {
+  if (material.type === IFC_CODES.IFCMATERIALLIST) {
     const mats = (Array.isArray(material.Materials) ? material.Materials : []).map(ref).filter((n): n is number => n !== undefined);
     const layers = mats.map((id) => ({ material: text(line(id).Name) || "unnamed material", thicknessM: 0 }));
     return layers.length > 0 ? setFrom("", layers) : null;
   }
-  if (material.type === IFCMATERIAL) return setFrom("", [{ material: text(material.Name) || "unnamed material", thicknessM: 0 }]);
+  if (material.type === IFC_CODES.IFCMATERIAL) return setFrom("", [{ material: text(material.Name) || "unnamed material", thicknessM: 0 }]);
   return null;
 }

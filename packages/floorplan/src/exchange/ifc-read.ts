@@ -1,8 +1,5 @@
-import {
-  IFCBUILDINGSTOREY, IFCDOOR, IFCOPENINGELEMENT, IFCRELAGGREGATES, IFCRELASSOCIATESMATERIAL,
-  IFCRELCONTAINEDINSPATIALSTRUCTURE, IFCRELDEFINESBYTYPE, IFCRELFILLSELEMENT, IFCRELVOIDSELEMENT,
-  IFCSPACE, IFCUNITASSIGNMENT, IFCWALL, IFCWALLSTANDARDCASE, IFCWINDOW, type IfcAPI,
-} from "web-ifc";
+import type { IfcAPI } from "web-ifc";
+import { IFC_CODES } from "./ifc-codes.js";
 import type { Point } from "../document/schema.js";
 import { polygonAreaM2 } from "../geometry/polygon.js";
 import { ReportLines } from "./dxf-report.js";
@@ -122,31 +119,31 @@ function readModel(api: IfcAPI, modelID: number, onProgress?: (done: number, tot
     const c = (byType[type] ??= { read: 0, used: 0, skipped: 0 });
     c[what]++;
   };
-  const unitAssignments = ids(api, modelID, IFCUNITASSIGNMENT);
+  const unitAssignments = ids(api, modelID, IFC_CODES.IFCUNITASSIGNMENT);
   const lengthUnit = lengthUnitOf(unitAssignments.map(line), line);
   const metres = lengthUnit.metres;
 
-  const storeyIds = ids(api, modelID, IFCBUILDINGSTOREY);
+  const storeyIds = ids(api, modelID, IFC_CODES.IFCBUILDINGSTOREY);
   if (storeyIds.length === 0) {
     return { ok: false, problem: { code: "ifc-no-storeys", message: "The IFC file has no building storeys, so there is nothing to put on plan levels." } };
   }
   // Which storey an element belongs to: containment and aggregation, followed upwards.
   const parent = new Map<number, number>();
-  for (const r of ids(api, modelID, IFCRELAGGREGATES).map(line)) for (const c of refs(r.RelatedObjects)) parent.set(c, ref(r.RelatingObject)!);
-  for (const r of ids(api, modelID, IFCRELCONTAINEDINSPATIALSTRUCTURE).map(line)) for (const c of refs(r.RelatedElements)) parent.set(c, ref(r.RelatingStructure)!);
+  for (const r of ids(api, modelID, IFC_CODES.IFCRELAGGREGATES).map(line)) for (const c of refs(r.RelatedObjects)) parent.set(c, ref(r.RelatingObject)!);
+  for (const r of ids(api, modelID, IFC_CODES.IFCRELCONTAINEDINSPATIALSTRUCTURE).map(line)) for (const c of refs(r.RelatedElements)) parent.set(c, ref(r.RelatingStructure)!);
   const storeySet = new Set(storeyIds);
   const storeyOf = (id: number): number | undefined => {
     for (let cur: number | undefined = parent.get(id), n = 0; cur !== undefined && n < 16; cur = parent.get(cur), n++) if (storeySet.has(cur)) return cur;
     return undefined;
   };
   const materialOf = new Map<number, number>();
-  for (const r of ids(api, modelID, IFCRELASSOCIATESMATERIAL).map(line)) for (const o of refs(r.RelatedObjects)) materialOf.set(o, ref(r.RelatingMaterial)!);
+  for (const r of ids(api, modelID, IFC_CODES.IFCRELASSOCIATESMATERIAL).map(line)) for (const o of refs(r.RelatedObjects)) materialOf.set(o, ref(r.RelatingMaterial)!);
   const typeOf = new Map<number, number>();
-  for (const r of ids(api, modelID, IFCRELDEFINESBYTYPE).map(line)) for (const o of refs(r.RelatedObjects)) typeOf.set(o, ref(r.RelatingType)!);
+  for (const r of ids(api, modelID, IFC_CODES.IFCRELDEFINESBYTYPE).map(line)) for (const o of refs(r.RelatedObjects)) typeOf.set(o, ref(r.RelatingType)!);
   const wallOfOpening = new Map<number, number>();
-  for (const r of ids(api, modelID, IFCRELVOIDSELEMENT).map(line)) wallOfOpening.set(ref(r.RelatedOpeningElement)!, ref(r.RelatingBuildingElement)!);
+  for (const r of ids(api, modelID, IFC_CODES.IFCRELVOIDSELEMENT).map(line)) wallOfOpening.set(ref(r.RelatedOpeningElement)!, ref(r.RelatingBuildingElement)!);
   const openingOfFilling = new Map<number, number>();
-  for (const r of ids(api, modelID, IFCRELFILLSELEMENT).map(line)) openingOfFilling.set(ref(r.RelatedBuildingElement)!, ref(r.RelatingOpeningElement)!);
+  for (const r of ids(api, modelID, IFC_CODES.IFCRELFILLSELEMENT).map(line)) openingOfFilling.set(ref(r.RelatedBuildingElement)!, ref(r.RelatingOpeningElement)!);
 
   const globalId = (l: Line) => text(l.GlobalId) || `#${l.expressID}`;
   const storeyGid = new Map<number, string>();
@@ -163,10 +160,10 @@ function readModel(api: IfcAPI, modelID: number, onProgress?: (done: number, tot
     return best.globalId;
   };
 
-  const wallIds = [...new Set([...ids(api, modelID, IFCWALL, true), ...ids(api, modelID, IFCWALLSTANDARDCASE)])];
-  const spaceIds = ids(api, modelID, IFCSPACE);
-  const doorIds = ids(api, modelID, IFCDOOR, true);
-  const windowIds = ids(api, modelID, IFCWINDOW, true);
+  const wallIds = [...new Set([...ids(api, modelID, IFC_CODES.IFCWALL, true), ...ids(api, modelID, IFC_CODES.IFCWALLSTANDARDCASE)])];
+  const spaceIds = ids(api, modelID, IFC_CODES.IFCSPACE);
+  const doorIds = ids(api, modelID, IFC_CODES.IFCDOOR, true);
+  const windowIds = ids(api, modelID, IFC_CODES.IFCWINDOW, true);
   const total = wallIds.length + spaceIds.length + doorIds.length + windowIds.length;
   let done = 0;
   const tick = () => {
@@ -234,7 +231,7 @@ function readModel(api: IfcAPI, modelID: number, onProgress?: (done: number, tot
       const typeName = api.GetNameFromTypeCode(l.type);
       count(typeName, "read");
       const voidId = openingOfFilling.get(id);
-      const mesh = worldMesh(api, modelID, id) ?? (voidId !== undefined && line(voidId).type === IFCOPENINGELEMENT ? worldMesh(api, modelID, voidId) : null);
+      const mesh = worldMesh(api, modelID, id) ?? (voidId !== undefined && line(voidId).type === IFC_CODES.IFCOPENINGELEMENT ? worldMesh(api, modelID, voidId) : null);
       const rect = mesh ? wallAxisFromPoints(mesh.points.map((p) => ({ x: p.x, y: p.y }))) : null;
       const w = num(l.OverallWidth), h = num(l.OverallHeight);
       const widthM = w !== undefined ? w * metres : rect?.lengthM;
