@@ -1,10 +1,15 @@
+import { spawnSync } from "node:child_process";
 import { readFileSync } from "node:fs";
+import { fileURLToPath } from "node:url";
 import type supertest from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { generateSyntheticBuilding, serializePlan } from "@hushmark/floorplan";
+import { constructionCatalogue, generateSyntheticBuilding, serializePlan } from "@hushmark/floorplan";
+import { evaluateScenario } from "../src/scenarios/scenario-evaluate.js";
 import { addMember, newFirm, startHarness, type Harness } from "./harness.js";
 
-const demoPlan = JSON.parse(readFileSync(new URL("../../../examples/fernhollow-studio.plan.json", import.meta.url), "utf8")) as Record<string, unknown>;
+const demoPlanUrl = new URL("../../../examples/fernhollow-studio.plan.json", import.meta.url);
+const demoPlan = JSON.parse(readFileSync(demoPlanUrl, "utf8")) as Record<string, unknown>;
+const root = fileURLToPath(new URL("../../../", import.meta.url));
 
 const request = (planVersion: number, extra: Record<string, unknown> = {}) => ({
   planVersion,
@@ -48,6 +53,30 @@ describe("the analysis API", () => {
     expect(body.paths.length).toBeGreaterThan(0);
     expect(body.paths[0].label).toMatch(/^Path 1 — /);
     expect(body.target).toMatchObject({ kind: "nc", value: 25 });
+  });
+
+  it("gives the command line's numbers and the scenarios' before-levels for the same inputs", async () => {
+    const api = (await owner.post(`/api/v1/projects/${projectId}/analyses`).send(request(version, { paths: 3 }))).body;
+    const cli = spawnSync(process.execPath, ["scripts/hushmark.mjs", "analyze", fileURLToPath(demoPlanUrl), "--source", "cafe", "--receiver", "record", "--spectrum", "speech-raised", "--target-nc", "25", "--k", "3", "--json"], { cwd: root, encoding: "utf8" });
+    expect(cli.status, cli.stderr).toBe(0);
+    const out = JSON.parse(cli.stdout);
+    // The command line rounds levels and gains to 0.01 dB and shares to 0.0001.
+    api.receiver.levelsDb.forEach((v: number, b: number) => expect(Math.abs(v - out.receiver.levelsDb[b])).toBeLessThanOrEqual(0.005 + 1e-9));
+    expect(Math.abs(api.receiver.dba - out.receiver.dba)).toBeLessThanOrEqual(0.005 + 1e-9);
+    expect(out.receiver.nc).toBe(api.receiver.nc);
+    expect(out.elements.map((e: { elementId: string }) => e.elementId)).toEqual(api.elements.map((e: { elementId: string }) => e.elementId));
+    api.elements.forEach((e: { share: number; gainIfPerfectDb: number; gainExact: boolean }, i: number) => {
+      expect(Math.abs(e.share - out.elements[i].share)).toBeLessThanOrEqual(0.00005 + 1e-9);
+      if (Number.isFinite(e.gainIfPerfectDb)) expect(Math.abs(e.gainIfPerfectDb - out.elements[i].gainIfPerfectDb)).toBeLessThanOrEqual(0.005 + 1e-9);
+      expect(out.elements[i].gainExact).toBe(e.gainExact);
+    });
+    // A door's own gain comes from re-solving without it, on the API as on the command line.
+    expect(api.elements.some((e: { kind: string; gainExact: boolean }) => e.kind === "door" && e.gainExact)).toBe(true);
+    expect(out.paths.map((p: { steps: unknown }) => p.steps)).toEqual(api.paths.map((p: { steps: unknown }) => p.steps));
+    const scenario = evaluateScenario(demoPlan, { planVersion: version, source: request(version).source as never, receiverId: "record", target: { kind: "nc", nc: 25 } }, [], constructionCatalogue);
+    if (!scenario.ok) throw new Error(scenario.message);
+    scenario.evaluation.before.levelsDb.forEach((v, b) => expect(v).toBeCloseTo(api.receiver.levelsDb[b], 6));
+    expect(scenario.evaluation.before.dba).toBeCloseTo(api.receiver.dba, 6);
   });
 
   it("serves the same inputs from the cache with the same numbers", async () => {

@@ -12,7 +12,7 @@ import type { ParsedAnalysisRequest } from "./compute.js";
 import type { AnalysisPool } from "./pool.js";
 
 /** Bumped when the computation changes, so older cached results are not served. */
-const ENGINE_CACHE_GENERATION = "1";
+const ENGINE_CACHE_GENERATION = "2";
 
 function cacheKey(request: ParsedAnalysisRequest, catalogueDigest: string): string {
   const canonical = canonicalJson(request);

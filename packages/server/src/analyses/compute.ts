@@ -1,7 +1,7 @@
-import { parseNetwork, solveNetwork, type Network, type Target as EngineTarget } from "@hushmark/acoustics";
+import type { Network, Target as EngineTarget } from "@hushmark/acoustics";
 import {
-  BANDS_HZ, buildNetwork, catalogueWith, constructionCatalogue, mapResultToPlan, OUTDOORS_ID, parsePlan, sourceSpectrum,
-  type Catalogue, type Construction, type Plan, type Problem,
+  ANALYSIS_REQUEST_PROBLEM, BANDS_HZ, catalogueWith, constructionCatalogue, engineTargetOf, OUTDOORS_ID, parsePlan, preparePlanNetwork, solvePlan,
+  type AnalysisSource, type Catalogue, type Construction, type Plan, type PreparedPlanNetwork, type Problem,
 } from "@hushmark/floorplan";
 import type { AnalysisResult, AnalysisTarget, PlanProblem } from "@hushmark/schemas";
 import { analysisRequestSchema } from "@hushmark/schemas";
@@ -14,6 +14,8 @@ export type AnalysisOutcome =
   | { ok: true; result: Omit<AnalysisResult, "cached" | "computeMs" | "planVersion"> }
   | { ok: false; status: 400 | 422; code: string; message: string; problems: PlanProblem[] };
 
+type Failure = Extract<AnalysisOutcome, { ok: false }>;
+
 const problemDto = (p: Problem): PlanProblem => ({
   code: p.code,
   severity: p.severity,
@@ -23,10 +25,7 @@ const problemDto = (p: Problem): PlanProblem => ({
 });
 
 export function engineTarget(target: AnalysisTarget | undefined): EngineTarget | undefined {
-  if (!target) return undefined;
-  if (target.kind === "nc") return { kind: "nc", nc: Math.min(70, Math.max(15, target.nc)) };
-  if (target.kind === "dba") return { kind: "level", dba: target.dba };
-  return { kind: "reduction", db: target.reductionDb };
+  return target ? engineTargetOf(target) : undefined;
 }
 
 export function spaceName(plan: Plan, id: string): string {
@@ -35,73 +34,49 @@ export function spaceName(plan: Plan, id: string): string {
   return el?.name || id;
 }
 
-function failure(status: 400 | 422, code: string, message: string, problems: PlanProblem[] = []): AnalysisOutcome {
+function failure(status: 400 | 422, code: string, message: string, problems: PlanProblem[] = []): Failure {
   return { ok: false, status, code, message, problems };
 }
 
+/** The floorplan's problems as an answer: the request's own mistakes are 400, a plan that cannot be analysed 422. */
+function failureOf(problems: readonly Problem[]): Failure {
+  const asked = problems.find((p) => p.code === ANALYSIS_REQUEST_PROBLEM);
+  if (asked) return failure(400, "invalid_input", asked.message);
+  return failure(422, "plan_problems", "The plan has problems to fix before it can be analysed.", problems.filter((p) => p.severity === "error").map(problemDto));
+}
+
+/** The API's source in the floorplan's terms. */
+function planSource(source: ParsedAnalysisRequest["source"]): AnalysisSource {
+  if (source.kind === "impact") return { impactOnRoomId: source.roomId };
+  return source.spectrum.kind === "library" ? { spaceId: source.spaceId, spectrumId: source.spectrum.id } : { spaceId: source.spaceId, levelsDb: [...source.spectrum.levelsDb] };
+}
+
+function planOf(document: unknown): { ok: true; plan: Plan } | Failure {
+  const parsed = parsePlan(document);
+  if (parsed.ok) return { ok: true, plan: parsed.plan };
+  return failure(422, "plan_problems", "The saved plan is not a valid plan document.", parsed.problems.slice(0, 50).map(problemDto));
+}
+
+/** The built-in catalogue with a firm's own constructions added. */
+export function catalogueFor(firmConstructions: readonly Construction[]): Catalogue {
+  return firmConstructions.length ? catalogueWith(constructionCatalogue, { constructions: [...firmConstructions] }) : constructionCatalogue;
+}
+
 /**
- * Plan document + request → the analysis: builds the network from the plan and the catalogue,
- * solves it exactly, and maps shares, gains and paths back onto plan elements. Pure; runs in a
- * worker thread.
+ * Plan document + request → the analysis, by the floorplan's `solvePlan` (the command line's
+ * own path): builds the network from the plan and the catalogue, solves it exactly, maps shares,
+ * gains (exact for the strongest doors and wall parts too) and paths back onto plan elements.
+ * Pure; runs in a worker thread.
  */
 export function computeAnalysis(document: unknown, request: ParsedAnalysisRequest, catalogue: Catalogue = constructionCatalogue): AnalysisOutcome {
-  return analyse(document, request, catalogue);
-}
-
-/** The same with a firm's own constructions added to the built-in catalogue. */
-export function computeAnalysisWith(document: unknown, request: ParsedAnalysisRequest, firmConstructions: Construction[]): AnalysisOutcome {
-  return analyse(document, request, firmConstructions.length ? catalogueWith(constructionCatalogue, { constructions: firmConstructions }) : constructionCatalogue);
-}
-
-/** The plan built into a parsed network for a request, or why it cannot be. */
-export type PreparedNetwork =
-  | { ok: true; plan: Plan; built: Extract<ReturnType<typeof buildNetwork>, { ok: true }>; network: Network; sourceId: string }
-  | Extract<AnalysisOutcome, { ok: false }>;
-
-/** Parses the plan, builds its network with the request's source and checks the spaces; shared by analyses and scenarios. */
-export function prepareNetwork(document: unknown, request: Pick<ParsedAnalysisRequest, "source" | "receiverId">, catalogue: Catalogue): PreparedNetwork {
-  const parsed = parsePlan(document);
-  if (!parsed.ok) {
-    return failure(422, "plan_problems", "The saved plan is not a valid plan document.", parsed.problems.slice(0, 50).map(problemDto)) as Extract<AnalysisOutcome, { ok: false }>;
-  }
+  const parsed = planOf(document);
+  if (!parsed.ok) return parsed;
   const plan = parsed.plan;
-  const source = request.source;
-  let sources: NonNullable<Parameters<typeof buildNetwork>[2]>["sources"];
-  let sourceId: string;
-  const fail = (status: 400 | 422, code: string, message: string, problems: PlanProblem[] = []) => failure(status, code, message, problems) as Extract<AnalysisOutcome, { ok: false }>;
-  if (source.kind === "airborne") {
-    const levels = source.spectrum.kind === "library" ? sourceSpectrum(source.spectrum.id)?.levelsDb : source.spectrum.levelsDb;
-    if (!levels) return fail(400, "invalid_input", `There is no source spectrum "${source.spectrum.kind === "library" ? source.spectrum.id : ""}" in the library.`, []);
-    sources = [{ type: "airborne", spaceId: source.spaceId, levelsDb: [...levels] }];
-    sourceId = source.spaceId;
-  } else {
-    sources = [{ type: "impact", roomId: source.roomId }];
-    sourceId = source.roomId;
-  }
-  if (sourceId === request.receiverId) return fail(400, "invalid_input", "The source and the receiver are the same space; pick two different ones.");
-  const built = buildNetwork(plan, catalogue, { sources });
-  if (!built.ok) {
-    return fail(422, "plan_problems", "The plan has problems to fix before it can be analysed.", built.problems.filter((p) => p.severity === "error").map(problemDto));
-  }
-  const spaceIds = new Set(built.network.spaces.map((s) => s.id));
-  if (!spaceIds.has(request.receiverId)) return fail(400, "invalid_input", `"${request.receiverId}" is not a room or space of this plan.`);
-  if (source.kind === "airborne" && !spaceIds.has(source.spaceId)) return fail(400, "invalid_input", `"${source.spaceId}" is not a room or space of this plan.`);
-  const network = parseNetwork(built.network);
-  if (!network.ok) {
-    return fail(422, "plan_problems", "The plan produced a network the engine cannot read.", network.issues.slice(0, 20).map((i) => ({ code: "network", severity: "error", elementId: null, message: `${i.path}: ${i.message}` })));
-  }
-  return { ok: true, plan, built, network: network.value, sourceId };
-}
-
-function analyse(document: unknown, request: ParsedAnalysisRequest, catalogue: Catalogue): AnalysisOutcome {
-  const prepared = prepareNetwork(document, request, catalogue);
-  if (!prepared.ok) return prepared;
-  const { plan, built, sourceId } = prepared;
-  const network = { value: prepared.network };
-  const target = engineTarget(request.target);
-  const solved = solveNetwork(network.value, { receiver: request.receiverId, k: request.paths, gains: 20, ...(target ? { target } : {}) });
-  const onPlan = mapResultToPlan(plan, built, solved);
-  const sourceSpace = solved.spaces.find((s) => s.id === sourceId);
+  // Only the request's (or the brief's) target: the room's own target is the editor's default, not the API's.
+  const solved = solvePlan(plan, catalogue, { source: planSource(request.source), receiver: request.receiverId, k: request.paths, gains: 20, target: request.target ?? null });
+  if (!solved.ok) return failureOf(solved.problems);
+  const { result, onPlan, built, sourceId } = solved;
+  const sourceSpace = result.spaces.find((s) => s.id === sourceId);
   const elementNames = new Map(onPlan.elements.map((e) => [e.elementId, e.name]));
   const labelFor = (steps: (typeof onPlan.paths)[number]["steps"]) => {
     const via = steps.flatMap((s) => (s.kind === "element" ? [elementNames.get(s.elementId) ?? spaceName(plan, s.elementId)] : []));
@@ -112,13 +87,13 @@ function analyse(document: unknown, request: ParsedAnalysisRequest, catalogue: C
     result: {
       bandsHz: [...BANDS_HZ],
       source: { id: sourceId, name: spaceName(plan, sourceId), levelsDb: [...(sourceSpace?.levelsDb ?? [])], dba: sourceSpace?.dba ?? 0 },
-      receiver: { id: request.receiverId, name: spaceName(plan, request.receiverId), levelsDb: [...solved.levelsDb], dba: solved.dba, nc: solved.nc.value },
-      target: solved.shortfall && request.target
+      receiver: { id: request.receiverId, name: spaceName(plan, request.receiverId), levelsDb: [...result.levelsDb], dba: result.dba, nc: result.nc.value },
+      target: result.shortfall && request.target
         ? {
             kind: request.target.kind,
             value: request.target.kind === "nc" ? request.target.nc : request.target.kind === "dba" ? request.target.dba : request.target.reductionDb,
-            met: solved.shortfall.met,
-            shortfallDb: solved.shortfall.shortfallDb,
+            met: result.shortfall.met,
+            shortfallDb: result.shortfall.shortfallDb,
           }
         : null,
       elements: onPlan.elements.map((e) => ({ ...e, shareByBand: [...e.shareByBand] })),
@@ -126,4 +101,23 @@ function analyse(document: unknown, request: ParsedAnalysisRequest, catalogue: C
       assumptions: built.assumptions.map(problemDto),
     },
   };
+}
+
+/** The same with a firm's own constructions added to the built-in catalogue. */
+export function computeAnalysisWith(document: unknown, request: ParsedAnalysisRequest, firmConstructions: Construction[]): AnalysisOutcome {
+  return computeAnalysis(document, request, catalogueFor(firmConstructions));
+}
+
+/** The plan built into the engine's network for a request, or why it cannot be. */
+export type PreparedNetwork =
+  | { ok: true; plan: Plan; built: Extract<PreparedPlanNetwork, { ok: true }>["built"]; network: Network; sourceId: string }
+  | Failure;
+
+/** Parses the plan and builds its network with the request's source, as `solvePlan` does; for scenarios. */
+export function prepareNetwork(document: unknown, request: Pick<ParsedAnalysisRequest, "source" | "receiverId">, catalogue: Catalogue): PreparedNetwork {
+  const parsed = planOf(document);
+  if (!parsed.ok) return parsed;
+  const prepared = preparePlanNetwork(parsed.plan, catalogue, { source: planSource(request.source), receiver: request.receiverId });
+  if (!prepared.ok) return failureOf(prepared.problems);
+  return { ok: true, plan: parsed.plan, built: prepared.built, network: prepared.built.network, sourceId: prepared.sourceId };
 }
