@@ -1,0 +1,157 @@
+import "reflect-metadata";
+import PgBoss from "pg-boss";
+import supertest from "supertest";
+import type { DataSource } from "typeorm";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { startMailFake, startS3Fake, type MailFake, type S3Fake } from "@hushmark/fakes";
+import { createDataSource } from "../src/data-source.js";
+import { PASSWORD, uniqueEmail, type Harness } from "./harness.js";
+import { demoPlan, pricedProject, SETUP, until } from "./money-harness.js";
+import { freePort, person, startServerProcess, type ServerProcess } from "./support/server-process.js";
+
+const JOBS_SCHEMA = `pgboss_kill_${process.pid}`;
+
+/**
+ * The server process killed outright (SIGKILL: no shutdown hook runs) in the middle of saves and of
+ * a background job; a new process on the same port takes over. Saves are whole or absent, and the
+ * job's effect happens once.
+ */
+describe("server process killed", () => {
+  let mail: MailFake;
+  let s3: S3Fake;
+  let dataSource: DataSource;
+  let server: ServerProcess | undefined;
+  let port: number;
+  let env: Record<string, string>;
+
+  const restart = async () => {
+    server = await startServerProcess(env, port);
+  };
+
+  beforeAll(async () => {
+    mail = await startMailFake();
+    s3 = await startS3Fake();
+    dataSource = createDataSource(process.env.DATABASE_URL!, { poolSize: 2 });
+    await dataSource.initialize();
+    port = await freePort();
+    env = {
+      HUSHMARK_PUBLIC_URL: `http://127.0.0.1:${port}`,
+      HUSHMARK_JWT_SECRET: "a secret for the process-kill test, 32+ chars",
+      HUSHMARK_SMTP_PORT: String(mail.smtpPort),
+      HUSHMARK_MAIL_API_URL: `http://127.0.0.1:${mail.httpPort}`,
+      HUSHMARK_S3_ENDPOINT: s3.endpoint,
+      HUSHMARK_JOBS_SCHEMA: JOBS_SCHEMA,
+    };
+    await restart();
+  }, 60_000);
+  afterAll(async () => {
+    await server?.kill("SIGTERM");
+    await dataSource?.query(`DROP SCHEMA IF EXISTS ${JOBS_SCHEMA} CASCADE`);
+    await dataSource?.destroy();
+    await mail?.close();
+    await s3?.close();
+  }, 60_000);
+
+  it("leaves each plan at a whole revision, old or new, when killed mid-save (4 kills at random moments)", async () => {
+    const call = person(() => server!.base);
+    expect((await call("POST", "/api/v1/auth/sign-up", { firmName: "Kill Firm", displayName: "Owner", email: uniqueEmail("kill"), password: PASSWORD })).status).toBe(201);
+    const projectId = (await call("POST", "/api/v1/projects", { title: "Killed while saving" })).body.id as string;
+    // About 1 MB of notes so that a save spends a while in the process and in the transaction.
+    const notes = Object.fromEntries(Array.from({ length: 3000 }, (_, i) => [`note-${i}`, { type: "note", id: `note-${i}`, levelId: "ground", position: { x: i % 14, y: i % 9 }, text: `Survey note ${i} `.repeat(15) }]));
+    const big = { ...demoPlan, elements: { ...(demoPlan.elements as object), ...notes } };
+    const sent = new Set<string>();
+    const acknowledged = new Map<number, string>();
+    let version = (await call("GET", `/api/v1/projects/${projectId}/plan`)).body.version as number;
+
+    for (let round = 0; round < 4; round += 1) {
+      let running = true;
+      let n = 0;
+      const saver = (async () => {
+        while (running) {
+          const name = `Round ${round} save ${(n += 1)}`;
+          sent.add(name);
+          const res = await call("PUT", `/api/v1/projects/${projectId}/plan`, { baseVersion: version, document: { ...big, name } }).catch(() => ({ status: 0, body: null }));
+          if (res.status === 200) {
+            version = res.body.version;
+            acknowledged.set(res.body.version, name);
+          } else if (res.status === 0) running = false;
+          else throw new Error(`a save answered ${res.status}: ${JSON.stringify(res.body).slice(0, 300)}`);
+        }
+      })();
+      await new Promise((r) => setTimeout(r, 400 + Math.floor(Math.random() * 800)));
+      expect(await server!.kill("SIGKILL")).toBe("SIGKILL");
+      running = false;
+      await saver;
+      await restart();
+      version = (await call("GET", `/api/v1/projects/${projectId}/plan`)).body.version as number;
+
+      const [plan] = await dataSource.query("SELECT version, document->>'name' AS name, md5(document::text) AS hash FROM plans WHERE project_id = $1", [projectId]);
+      const revisions: { version: number; name: string; hash: string }[] = await dataSource.query(
+        "SELECT version, document->>'name' AS name, md5(document::text) AS hash FROM plan_revisions WHERE project_id = $1 ORDER BY version",
+        [projectId],
+      );
+      expect(revisions.map((r) => r.version), `round ${round}`).toEqual(Array.from({ length: plan.version }, (_, i) => i + 1));
+      if (plan.version > 0) expect(revisions.at(-1)!.hash, `round ${round}: the plan is not its newest revision`).toBe(plan.hash);
+      else expect(plan.name).toBe("Killed while saving");
+      for (const r of revisions.slice(1)) expect(sent.has(r.name), `revision ${r.version} holds a document nobody sent`).toBe(true);
+      for (const [v, name] of acknowledged) expect(revisions.find((r) => r.version === v)?.name, `acknowledged version ${v}`).toBe(name);
+    }
+    expect(acknowledged.size).toBeGreaterThan(0);
+  }, 60_000);
+
+  it("renders a proposal's PDF exactly once in effect when the process dies during the job", async () => {
+    const h: Harness = { dataSource, mail, request: () => supertest.agent(server!.base), close: async () => undefined };
+    const p = await pricedProject(h);
+    const scenario = await p.planner.post(`/api/v1/projects/${p.projectId}/scenarios`).send({
+      name: "Seal and line",
+      setup: SETUP(p.planVersion),
+      items: [
+        { priceBookItemId: p.byCode("door-bottom-auto").id, elementId: "door-studio" },
+        { priceBookItemId: p.byCode("baffle-box").id, elementId: "supply-duct" },
+      ],
+    });
+    expect(scenario.status, JSON.stringify(scenario.body).slice(0, 300)).toBe(201);
+
+    // Make proposals until the kill lands while a PDF job is running (a render takes a moment).
+    let killed: { proposalId: string; jobId: string } | undefined;
+    for (let attempt = 0; attempt < 5 && !killed; attempt += 1) {
+      const created = await p.planner.post(`/api/v1/projects/${p.projectId}/proposals`).send({ scenarioId: scenario.body.id });
+      expect(created.status).toBe(201);
+      const job = await until("the PDF job", async () => {
+        const rows: { id: string; state: string }[] = await dataSource.query(`SELECT id, state FROM ${JOBS_SCHEMA}.job WHERE name = 'proposal-pdf' AND data->>'proposalId' = $1`, [created.body.id]);
+        return rows[0] && rows[0].state !== "created" ? rows[0] : undefined;
+      }, 10_000).catch(() => undefined);
+      if (job?.state === "active") {
+        await server!.kill("SIGKILL");
+        const [after] = await dataSource.query(`SELECT state FROM ${JOBS_SCHEMA}.job WHERE id = $1`, [job.id]);
+        if (after.state === "active") killed = { proposalId: created.body.id, jobId: job.id };
+        await restart();
+      }
+    }
+    expect(killed, "never caught a PDF job running").toBeDefined();
+    const { proposalId, jobId } = killed!;
+
+    // The dead process's job stays active until its expiry (120 s); move its start back by an hour
+    // instead of waiting, and let a maintenance pass (pg-boss's, every second here) take it back.
+    await dataSource.query(`UPDATE ${JOBS_SCHEMA}.job SET started_on = now() - interval '1 hour' WHERE id = $1`, [jobId]);
+    const maintenance = new PgBoss({ connectionString: process.env.DATABASE_URL!, schema: JOBS_SCHEMA, maintenanceIntervalSeconds: 1, schedule: false, max: 2 });
+    maintenance.on("error", () => undefined);
+    await maintenance.start();
+    try {
+      await until("the PDF after the crash", async () => {
+        const r = await p.planner.get(`/api/v1/proposals/${proposalId}/versions/1/pdf`);
+        return r.status === 200 ? true : undefined;
+      }, 40_000);
+    } finally {
+      await maintenance.stop({ graceful: false, wait: true });
+    }
+    const [job] = await dataSource.query(`SELECT state, retry_count FROM ${JOBS_SCHEMA}.job WHERE id = $1`, [jobId]);
+    expect(job.state).toBe("completed");
+    expect(job.retry_count).toBeGreaterThanOrEqual(1);
+    const [version] = await dataSource.query("SELECT pdf_status, pdf_file_id FROM proposal_versions WHERE proposal_id = $1 AND version = 1", [proposalId]);
+    expect(version.pdf_status).toBe("ready");
+    // One stored PDF for the version, and no orphan left by the killed render.
+    const pdfs: { id: string }[] = await dataSource.query("SELECT id FROM stored_files WHERE project_id = $1 AND content_type = 'application/pdf' AND original_name LIKE $2", [p.projectId, `proposal-${proposalId.slice(0, 8)}-v1%`]);
+    expect(pdfs.map((f) => f.id)).toEqual([version.pdf_file_id]);
+  }, 90_000);
+});
