@@ -10,7 +10,19 @@ export const projectInputSchema = z.object({
 });
 export type ProjectInput = z.input<typeof projectInputSchema>;
 
-export const projectUpdateSchema = projectInputSchema.partial();
+/**
+ * Where the site is, for map exports: WGS84 latitude and longitude of the plan origin, and the
+ * bearing of the Sketch's up direction (plan +y) clockwise from true north, degrees.
+ */
+export const siteLocationSchema = z.object({
+  latDeg: z.number({ error: "Give the latitude in degrees." }).finite().min(-90, "A latitude lies between −90° and 90°.").max(90, "A latitude lies between −90° and 90°."),
+  lonDeg: z.number({ error: "Give the longitude in degrees." }).finite().min(-180, "A longitude lies between −180° and 180°.").max(180, "A longitude lies between −180° and 180°."),
+  planNorthBearingDeg: z.number({ error: "Give the bearing in degrees." }).finite().min(0, "A bearing lies from 0° up to 360°.").lt(360, "A bearing lies from 0° up to 360°.").default(0),
+});
+export type SiteLocation = z.infer<typeof siteLocationSchema>;
+
+/** A project's changes; `site: null` clears the site location. */
+export const projectUpdateSchema = projectInputSchema.partial().extend({ site: siteLocationSchema.nullable().optional() });
 export type ProjectUpdate = z.infer<typeof projectUpdateSchema>;
 
 export const projectClientSchema = z.object({ membershipId: z.uuid(), displayName: z.string(), email: z.string() });
@@ -19,6 +31,8 @@ export const projectSchema = z.object({
   id: z.uuid(),
   title: z.string(),
   siteAddress: z.string(),
+  /** Null until someone sets it; map exports then use the documented local frame. */
+  site: siteLocationSchema.nullable().optional(),
   status: projectStatusSchema,
   clients: z.array(projectClientSchema),
   planVersion: z.number().int(),

@@ -31,6 +31,7 @@ describe("bad input", () => {
     ["create project", "post", () => "/api/v1/projects", { title: "", status: "done" }, ["title", "status"]],
     ["get project", "get", () => "/api/v1/projects/nope", undefined, ["projectId"]],
     ["update project", "patch", (id) => `/api/v1/projects/${id}`, { title: 3 }, ["title"]],
+    ["update project site", "patch", (id) => `/api/v1/projects/${id}`, { site: { latDeg: 91, lonDeg: "east", planNorthBearingDeg: 360 } }, ["site.latDeg", "site.lonDeg", "site.planNorthBearingDeg"]],
     ["add client", "post", (id) => `/api/v1/projects/${id}/clients`, { membershipId: "x" }, ["membershipId"]],
     ["remove client", "delete", (id) => `/api/v1/projects/${id}/clients/x`, undefined, ["membershipId"]],
     ["get plan", "get", () => "/api/v1/projects/nope/plan", undefined, ["projectId"]],

@@ -22,6 +22,16 @@ export class Project {
   @Column({ type: "varchar", length: 300, name: "site_address", default: "" })
   siteAddress!: string;
 
+  /** WGS84 latitude and longitude of the plan origin and the bearing of plan +y from true north, degrees; null until set. */
+  @Column({ type: "double precision", name: "site_lat_deg", nullable: true })
+  siteLatDeg!: number | null;
+
+  @Column({ type: "double precision", name: "site_lon_deg", nullable: true })
+  siteLonDeg!: number | null;
+
+  @Column({ type: "double precision", name: "plan_north_bearing_deg", nullable: true })
+  planNorthBearingDeg!: number | null;
+
   @Column({ type: "varchar", length: 24, default: "brief" })
   status!: ProjectStatus;
 

@@ -10,6 +10,9 @@ interface ProjectRow {
   id: string;
   title: string;
   site_address: string;
+  site_lat_deg: number | null;
+  site_lon_deg: number | null;
+  plan_north_bearing_deg: number | null;
   status: ProjectDto["status"];
   created_at: Date;
   updated_at: Date;
@@ -18,7 +21,7 @@ interface ProjectRow {
 }
 
 const PROJECT_SQL = `
-  SELECT p.id, p.title, p.site_address, p.status, p.created_at, p.updated_at, pl.version AS plan_version,
+  SELECT p.id, p.title, p.site_address, p.site_lat_deg, p.site_lon_deg, p.plan_north_bearing_deg, p.status, p.created_at, p.updated_at, pl.version AS plan_version,
     (SELECT json_agg(json_build_object('membershipId', m.id, 'displayName', u.display_name, 'email', u.email) ORDER BY u.display_name)
        FROM project_clients pc JOIN memberships m ON m.id = pc.membership_id JOIN users u ON u.id = m.user_id
       WHERE pc.project_id = p.id) AS clients
@@ -32,6 +35,9 @@ function toDto(row: ProjectRow): ProjectDto {
     id: row.id,
     title: row.title,
     siteAddress: row.site_address,
+    site: row.site_lat_deg !== null && row.site_lon_deg !== null
+      ? { latDeg: row.site_lat_deg, lonDeg: row.site_lon_deg, planNorthBearingDeg: row.plan_north_bearing_deg ?? 0 }
+      : null,
     status: row.status,
     clients: row.clients ?? [],
     planVersion: row.plan_version ?? 0,
@@ -75,7 +81,10 @@ export function createProjectsService(dataSource: DataSource, emptyPlan: EmptyPl
 
   async function update(actor: Actor, id: string, patch: ProjectUpdate): Promise<ProjectDto> {
     await get(actor, id);
-    const changes = Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined));
+    const { site, ...rest } = patch;
+    const changes: Partial<Pick<Project, "title" | "siteAddress" | "status" | "siteLatDeg" | "siteLonDeg" | "planNorthBearingDeg">> = Object.fromEntries(Object.entries(rest).filter(([, v]) => v !== undefined));
+    // The three site columns change together: a site is set whole or cleared whole.
+    if (site !== undefined) Object.assign(changes, { siteLatDeg: site?.latDeg ?? null, siteLonDeg: site?.lonDeg ?? null, planNorthBearingDeg: site?.planNorthBearingDeg ?? null });
     if (Object.keys(changes).length) {
       await dataSource.getRepository(Project).update({ id, organizationId: actor.organizationId }, changes);
       await recordAudit(dataSource, { organizationId: actor.organizationId, actorUserId: actor.userId, action: "project.updated", entityType: "project", entityId: id, data: changes });
