@@ -90,7 +90,7 @@ describe("bad input", () => {
     for (const d of res.body.error.details) expect(d.message.length).toBeGreaterThan(3);
   });
 
-  it("refuses text holding a NUL character with 400 and the field's path, and stores nothing", async () => {
+  it("refuses text PostgreSQL cannot store (a NUL, half an emoji) with 400 and the field's path, and stores nothing", async () => {
     const before = (await owner.get("/api/v1/projects")).body.projects.length;
     const res = await owner.post("/api/v1/projects").send({ title: "Bad\u0000title" });
     expect(res.status).toBe(400);
@@ -99,6 +99,9 @@ describe("bad input", () => {
     const save = await owner.put(`/api/v1/projects/${projectId}/plan`).send({ baseVersion: plan.version, document: { ...plan.document, name: "a\u0000b" } });
     expect(save.status).toBe(400);
     expect(save.body.error.details[0].path).toBe("document.name");
+    const half = await owner.patch(`/api/v1/projects/${projectId}`).send({ siteAddress: "12 Elm Row \ud83d" });
+    expect(half.status).toBe(400);
+    expect(half.body.error.details[0]).toEqual({ path: "siteAddress", message: expect.stringMatching(/broken character/) });
     expect((await owner.get("/api/v1/projects")).body.projects.length).toBe(before);
     expect((await owner.get(`/api/v1/projects/${projectId}/plan`)).body.version).toBe(plan.version);
   });
