@@ -40,6 +40,9 @@ export default defineConfig({
         // Libraries change far less often than our code; separate chunks keep them cached across releases.
         codeSplitting: {
           groups: [
+            // Underlay converters load only when a PDF or HEIC file is chosen (dynamic import), never with the page.
+            { name: "pdf", test: /node_modules[\\/]pdfjs-dist[\\/]/, priority: 40 },
+            { name: "heic", test: /node_modules[\\/]heic2any[\\/]/, priority: 40 },
             // The plan editor's libraries load only with the Sketch and Paths sections.
             { name: "canvas", test: /node_modules[\\/](konva|react-konva|react-reconciler|its-fine|immer|@turf|rbush|quickselect|robust-predicates|splaytree|polyclip-ts|polygon-clipping|concaveman|earcut|tinyqueue|point-in-polygon|sweepline-intersections|geojson-equality-ts|topojson-client|topojson-server|d3-voronoi|marchingsquares|skmeans|@hushmark)[\\/]/, priority: 15 },
             { name: "react", test: /node_modules[\\/](react|react-dom|scheduler|react-router|react-router-dom)[\\/]/, priority: 30 },

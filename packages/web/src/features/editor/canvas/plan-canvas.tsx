@@ -7,6 +7,7 @@ import type { Viewport } from "../model/viewport";
 import { ElementsGroup, MovingGroup, changedIds } from "./elements-group";
 import { LabelsGroup } from "./labels-group";
 import { GridLayer } from "./grid-layer";
+import { UnderlayLayer } from "./underlay-layer";
 import { UiGroup } from "./ui-group";
 import { usePointerGestures } from "./use-pointer-gestures";
 import { useCompositedView } from "./use-composited-view";
@@ -27,6 +28,8 @@ export interface PlanCanvasProps {
   tool: Tool | null;
   /** The analysis overlay, drawn in plan metres above the elements. */
   overlay?: ReactNode;
+  /** Image URL of an underlay file; without it no underlays are drawn. */
+  underlaySrc?: (fileId: string) => string;
   /** Labels for the overlay, in screen pixels for the view it is drawn at. */
   overlayLabels?: (drawnView: Viewport) => ReactNode;
   onKeyDown?: (e: React.KeyboardEvent<HTMLDivElement>) => void;
@@ -46,11 +49,12 @@ export interface PlanCanvasHandle {
 export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function PlanCanvas(props, ref) {
   const { plan, basePlan, levelId, ghostLevelId, selection, problems, viewport: v, setViewport, width, height, tool, overlay, overlayLabels, onKeyDown, label, cursor } = props;
   const stageRef = useRef<Konva.Stage>(null);
+  const underlayRef = useRef<Konva.Layer>(null);
   const gridRef = useRef<Konva.Layer>(null);
   const elementsRef = useRef<Konva.Layer>(null);
   const overlayRef = useRef<Konva.Layer>(null);
   // The heavy layers draw at `d` and are moved by the compositor until the view settles at `v`.
-  const d = useCompositedView(v, [gridRef, elementsRef, overlayRef]);
+  const d = useCompositedView(v, [underlayRef, gridRef, elementsRef, overlayRef]);
   const [, setTick] = useState(0);
   const movingRef = useRef<{ key: string; ids: ReadonlySet<string> }>({ key: "", ids: new Set() });
   if (basePlan) {
@@ -98,6 +102,7 @@ export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function
       }}
     >
       <Stage ref={stageRef} width={width} height={height} listening={false}>
+        <UnderlayLayer ref={underlayRef} underlays={plan.underlays} levelId={levelId} v={d} src={props.underlaySrc} />
         <GridLayer ref={gridRef} v={d} width={width} height={height} />
         <Layer ref={elementsRef} listening={false}>
           <Group x={d.ox} y={d.oy} scaleX={d.scale} scaleY={-d.scale}>
