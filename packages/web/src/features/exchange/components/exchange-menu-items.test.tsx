@@ -1,6 +1,9 @@
 import { fireEvent, render, screen } from "@testing-library/react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { fernhollowStudioPlan } from "@hushmark/floorplan";
+import type { Project } from "@hushmark/schemas";
+import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
+import { projectKeys } from "../../projects/api/keys";
 import { ExportMenu } from "../../editor/components/export-menu";
 import { ExchangeMenuItems } from "./exchange-menu-items";
 
@@ -23,7 +26,7 @@ describe("exchange entries in the Export menu", () => {
     const { unmount } = render(<ExportMenu plan={plan} levelId="ground" title="Fernhollow" />);
     fireEvent.click(screen.getByRole("button", { name: "Export" }));
     expect(screen.getByRole("button", { name: "CAD drawing of this level (DXF)" })).toBeTruthy();
-    expect(screen.queryByRole("button", { name: /Bring in a CAD drawing/ })).toBeNull();
+    expect(screen.queryByRole("button", { name: "Import DXF…" })).toBeNull();
     unmount();
     render(<ExportMenu plan={plan} levelId="ground" title="Fernhollow" markup={{} as never} />);
     fireEvent.click(screen.getByRole("button", { name: "Export" }));
@@ -41,6 +44,27 @@ describe("exchange entries in the Export menu", () => {
     expect(await saved[0]!.blob.text()).toContain("ENTITIES");
     expect(JSON.parse(await saved[1]!.blob.text()).type).toBe("FeatureCollection");
     expect(screen.getByText(/local frame/)).toBeTruthy();
-    expect(screen.getByRole("button", { name: "Bring in a CAD drawing (DXF)…" })).toBeTruthy();
+    expect(screen.getByRole("button", { name: "Import DXF…" })).toBeTruthy();
+    expect(screen.getByRole("button", { name: "Import IFC…" })).toBeTruthy();
+  });
+
+  it("place the GeoJSON at the project's site location when it has one, without the local-frame note", async () => {
+    const saved = captureDownloads();
+    const project: Project = {
+      id: "0b8f7a4e-8a51-4c1e-9d1e-2b7f6d0c9a11", title: "Fernhollow Audio", siteAddress: "1 Invented Row", status: "survey", clients: [], planVersion: 3,
+      createdAt: "2026-01-01T00:00:00.000Z", updatedAt: "2026-01-01T00:00:00.000Z", site: { latDeg: 47.5, lonDeg: 8.25, planNorthBearingDeg: 0 },
+    };
+    const client = new QueryClient({ defaultOptions: { queries: { staleTime: Infinity, retry: false } } });
+    client.setQueryData(projectKeys.detail(project.id), project);
+    render(<QueryClientProvider client={client}><ExchangeMenuItems projectId={project.id} plan={fernhollowStudioPlan()} levelId="ground" title="Fernhollow Audio" onCommand={() => {}} /></QueryClientProvider>);
+    expect(screen.getByRole("button", { name: "Site location…" })).toBeTruthy();
+    fireEvent.click(screen.getByRole("button", { name: "Map data of this level (GeoJSON)" }));
+    const fc = JSON.parse(await saved[0]!.blob.text());
+    expect(fc.hushmark.frame).toBe("site");
+    const [lon, lat] = fc.features.find((f: { geometry: { type: string } }) => f.geometry.type === "Polygon").geometry.coordinates[0][0];
+    // A plan a few metres across lies within 0.001° of its site point.
+    expect(Math.abs(lon - 8.25)).toBeLessThan(1e-3);
+    expect(Math.abs(lat - 47.5)).toBeLessThan(1e-3);
+    expect(screen.queryByText(/local frame/)).toBeNull();
   });
 });
