@@ -19,6 +19,7 @@ import { ProblemsList } from "./problems-list";
 import { ConflictDialog } from "./conflict-dialog";
 import { LevelBar, levelBelow } from "./level-bar";
 import { ExportMenu } from "./export-menu";
+import { UnderlayMenu, UnderlayPicker, useUnderlaySrc, useUnderlayUi } from "../../underlays";
 
 type SideTab = "details" | "elements" | "problems";
 
@@ -33,6 +34,8 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
   const history = useHistoryLabels(store);
   const status = useSaveStatus(autosave);
   const conflict = useConflict(projectId, session);
+  const underlayUi = useUnderlayUi();
+  const underlaySrc = useUnderlaySrc(projectId);
   const [toolId, setToolId] = useState<ToolId>("select");
   const [levelId, setLevelId] = useState(() => levelsByElevation(store.plan).find((l) => l.elevationM >= 0)?.id ?? levelsByElevation(store.plan)[0]?.id ?? "ground");
   const [side, setSide] = useState<SideTab>("details");
@@ -91,6 +94,7 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
           </>
         ) : null}
         <button type="button" className="min-h-9 rounded-md px-2 text-[14px] hover:bg-ink/5" onClick={fit}>Fit to plan</button>
+        {!readOnly ? <UnderlayMenu projectId={projectId} plan={plan} levelId={levelId} store={store} ui={underlayUi} view={{ ...viewport, width: canvas.width, height: canvas.height }} /> : null}
         <div className="ml-auto"><ExportMenu plan={plan} levelId={levelId} title={title} projectId={projectId} onCommand={readOnly ? undefined : (c) => store.run(c)} /></div>
       </div>
       {session.loadProblem ? <p role="alert" className="bg-danger/10 px-3 py-2 text-sm text-danger">The stored plan could not be read ({session.loadProblem}); a blank plan is open. Nothing is saved until you draw.</p> : null}
@@ -99,7 +103,7 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
         <div className="flex min-h-0 flex-1">
           {!readOnly ? <ToolRail active={toolId} onPick={setToolId} /> : null}
           <div className="flex min-h-0 min-w-0 flex-1 flex-col">
-            <div ref={canvas.ref} className="min-h-0 flex-1" onPointerDownCapture={() => { fitted.current = true; }}>
+            <div ref={canvas.ref} className="relative min-h-0 flex-1" onPointerDownCapture={() => { fitted.current = true; }}>
               <PlanCanvas
                 ref={canvasRef}
                 plan={plan}
@@ -113,10 +117,12 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
                 width={canvas.width}
                 height={canvas.height}
                 tool={tool}
+                underlaySrc={underlaySrc}
                 onKeyDown={onKeyDown}
                 label={`Plan of ${title}. Use the tools on the left; the list of elements offers the same edits by keyboard.`}
                 cursor={readOnly ? "grab" : cursors[toolId] ?? "crosshair"}
               />
+              <UnderlayPicker ui={underlayUi} plan={plan} store={store} viewport={viewport} />
             </div>
             <StatusLine status={readOnly ? null : status} unit={plan.displayUnit} onUnit={readOnly ? undefined : (u) => store.run(setPlanUnit(u))} scale={viewport.scale} problems={counts} onProblems={() => setSide("problems")} hint={hint} onConflict={() => setConflictOpen(true)} />
           </div>
