@@ -5,6 +5,7 @@ export const panel = "#ffffff";
 export const rule = "#d9d4c7";
 export const muted = "#6b7080";
 export const brand = "#1f7a74";
+export const brandStrong = "#185f5a";
 export const focus = "#f2b233";
 export const good = "#2f8f4e";
 export const caution = "#c98a12";

@@ -25,7 +25,11 @@ function polygon(ctx: CanvasRenderingContext2D, pts: readonly Point[]): void {
 function strokeBands(ctx: CanvasRenderingContext2D, bands: readonly WallBand[], colour: string): void {
   // One path per thickness: thousands of walls become a handful of strokes.
   const byWidth = new Map<number, WallBand[]>();
-  for (const b of bands) byWidth.set(b.thicknessM, [...(byWidth.get(b.thicknessM) ?? []), b]);
+  for (const b of bands) {
+    const list = byWidth.get(b.thicknessM);
+    if (list) list.push(b);
+    else byWidth.set(b.thicknessM, [b]);
+  }
   ctx.strokeStyle = colour;
   ctx.lineCap = "square";
   for (const [w, list] of byWidth) {
@@ -37,6 +41,9 @@ function strokeBands(ctx: CanvasRenderingContext2D, bands: readonly WallBand[], 
   ctx.lineCap = "butt";
 }
 
+/** Below this many pixels per metre door swings and window lines are drawn plainly: their detail is a few pixels wide and dashed arcs are slow to paint by the thousand. */
+const DETAIL_SCALE = 14;
+
 function paintOpening(ctx: CanvasRenderingContext2D, o: Opening, s: OpeningSpan, px: number): void {
   const { start: a, end: b, normal: n } = s;
   const h = s.thicknessM / 2 + 0.004;
@@ -45,6 +52,11 @@ function paintOpening(ctx: CanvasRenderingContext2D, o: Opening, s: OpeningSpan,
   polygon(ctx, [{ x: a.x + n.x * h, y: a.y + n.y * h }, { x: b.x + n.x * h, y: b.y + n.y * h }, { x: b.x - n.x * h, y: b.y - n.y * h }, { x: a.x - n.x * h, y: a.y - n.y * h }]);
   ctx.fill();
   ctx.strokeStyle = ink;
+  if (px > 1 / DETAIL_SCALE && o.type !== "penetration") {
+    ctx.lineWidth = 1.5 * px;
+    ctx.beginPath(); ctx.moveTo(a.x, a.y); ctx.lineTo(b.x, b.y); ctx.stroke();
+    return;
+  }
   if (o.type === "door") {
     const tip = { x: a.x + n.x * o.widthM, y: a.y + n.y * o.widthM };
     ctx.lineWidth = 2 * px;

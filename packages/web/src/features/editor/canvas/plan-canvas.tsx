@@ -30,11 +30,30 @@ export interface PlanCanvasProps {
   overlay?: ReactNode;
   /** Image URL of an underlay file; without it no underlays are drawn. */
   underlaySrc?: (fileId: string) => string;
+  /** The latest reading beside each measurement pin, by pin id. */
+  pinReadings?: ReadonlyMap<string, string>;
   /** Labels for the overlay, in screen pixels for the view it is drawn at. */
   overlayLabels?: (drawnView: Viewport) => ReactNode;
   onKeyDown?: (e: React.KeyboardEvent<HTMLDivElement>) => void;
   label: string;
   cursor?: string;
+}
+
+const NO_PROBLEMS: readonly Problem[] = [];
+
+/**
+ * False until the browser has shown one frame: names, pins and problem badges wait for it, so
+ * opening a large plan puts its walls on screen first and the text a frame later.
+ */
+function useAfterFirstPaint(): boolean {
+  const [done, setDone] = useState(false);
+  useEffect(() => {
+    performance.mark("hushmark:plan-drawn");
+    let timer = 0;
+    const frame = requestAnimationFrame(() => { timer = window.setTimeout(() => setDone(true), 0); });
+    return () => { cancelAnimationFrame(frame); window.clearTimeout(timer); };
+  }, []);
+  return done;
 }
 
 export interface PlanCanvasHandle {
@@ -47,7 +66,7 @@ export interface PlanCanvasHandle {
  * is editor-core's, so no Konva node listens for events; the wrapper div takes the pointer.
  */
 export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function PlanCanvas(props, ref) {
-  const { plan, basePlan, levelId, ghostLevelId, selection, problems, viewport: v, setViewport, width, height, tool, overlay, overlayLabels, onKeyDown, label, cursor } = props;
+  const { plan, basePlan, levelId, ghostLevelId, selection, problems, viewport: v, setViewport, width, height, tool, overlay, overlayLabels, onKeyDown, label, cursor, pinReadings } = props;
   const stageRef = useRef<Konva.Stage>(null);
   const underlayRef = useRef<Konva.Layer>(null);
   const gridRef = useRef<Konva.Layer>(null);
@@ -56,6 +75,7 @@ export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function
   // The heavy layers draw at `d` and are moved by the compositor until the view settles at `v`.
   const d = useCompositedView(v, [underlayRef, gridRef, elementsRef, overlayRef]);
   const [, setTick] = useState(0);
+  const painted = useAfterFirstPaint();
   const movingRef = useRef<{ key: string; ids: ReadonlySet<string> }>({ key: "", ids: new Set() });
   if (basePlan) {
     const ids = changedIds(basePlan, plan);
@@ -114,7 +134,7 @@ export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function
           <Group x={d.ox} y={d.oy} scaleX={d.scale} scaleY={-d.scale}>{overlay}</Group>
           {/* Names stay above the analysis colours so they can always be read. */}
           <Group x={d.ox} y={d.oy}>
-            <LabelsGroup plan={drawnPlan} levelId={levelId} scale={d.scale} unit={plan.displayUnit} exclude={moving} />
+            {painted ? <LabelsGroup plan={drawnPlan} levelId={levelId} scale={d.scale} unit={plan.displayUnit} exclude={moving} width={width} height={height} ox={d.ox} oy={d.oy} {...(pinReadings ? { pinReadings } : {})} /> : null}
           </Group>
           {overlayLabels?.(d)}
         </Layer>
@@ -124,10 +144,10 @@ export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function
           </Group>
           {moving.size ? (
             <Group x={v.ox} y={v.oy}>
-              <LabelsGroup plan={plan} levelId={levelId} scale={v.scale} unit={plan.displayUnit} only={moving} />
+              <LabelsGroup plan={plan} levelId={levelId} scale={v.scale} unit={plan.displayUnit} only={moving} {...(pinReadings ? { pinReadings } : {})} />
             </Group>
           ) : null}
-          <UiGroup plan={plan} selection={selection} problems={problems} overlay={tool?.overlay ?? {}} v={v} />
+          <UiGroup plan={plan} selection={selection} problems={painted ? problems : NO_PROBLEMS} overlay={tool?.overlay ?? {}} v={v} />
         </Layer>
       </Stage>
     </div>

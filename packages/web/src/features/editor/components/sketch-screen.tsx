@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
 import { createTool, planBounds, boundsOfMany, setPlanUnit, type Clip, type ToolEnv, type ToolId } from "@hushmark/editor-core";
 import { levelsByElevation } from "@hushmark/floorplan";
 import type { PlanResponse } from "@hushmark/schemas";
@@ -10,6 +10,7 @@ import { useHistoryLabels, usePlan, useSelection } from "../hooks/use-store-valu
 import { editorKeyHandler } from "../hooks/use-editor-keys";
 import { useConflict } from "../hooks/use-conflict";
 import { useProblems } from "../hooks/use-problems";
+import { usePinReadings } from "../hooks/use-pin-readings";
 import { ToolRail } from "./tool-rail";
 import { StatusLine } from "./status-line";
 import { DetailsPanel } from "../panels/details-panel";
@@ -36,22 +37,27 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
   const conflict = useConflict(projectId, session);
   const underlayUi = useUnderlayUi();
   const underlaySrc = useUnderlaySrc(projectId);
+  const pins = usePinReadings(projectId, plan);
   const [toolId, setToolId] = useState<ToolId>("select");
   const [levelId, setLevelId] = useState(() => levelsByElevation(store.plan).find((l) => l.elevationM >= 0)?.id ?? levelsByElevation(store.plan)[0]?.id ?? "ground");
   const [side, setSide] = useState<SideTab>("details");
   const [viewport, setViewport] = useState<Viewport>({ scale: 50, ox: 200, oy: 400 });
   const [conflictOpen, setConflictOpen] = useState(true);
-  const canvas = useElementSize<HTMLDivElement>();
   const frame = useFillHeight<HTMLDivElement>();
+  const canvas = useElementSize<HTMLDivElement>(frame.height);
   const canvasRef = useRef<PlanCanvasHandle>(null);
   const clipboard = useRef<Clip | null>(null);
   const fitted = useRef(false);
 
   const fit = useCallback(() => setViewport(fitBounds(planBounds(store.plan, levelId), canvas.width, canvas.height)), [store, levelId, canvas.width, canvas.height]);
-  // Until the person moves the view, it follows the canvas size (the layout settles after the first measure).
-  useEffect(() => {
-    if (!fitted.current && canvas.width > 0 && canvas.height > 0) fit();
-  }, [canvas.width, canvas.height, fit]);
+  // The canvas mounts once the view is fitted to its settled size (measured under the frame's final
+  // height, before the first paint), so a large plan is drawn once, where it belongs.
+  const [viewReady, setViewReady] = useState(false);
+  const sized = canvas.width > 0 && canvas.height > 0 && frame.measured && canvas.key === frame.height;
+  // Until the person moves the view, it follows the canvas size.
+  useLayoutEffect(() => {
+    if (!fitted.current && sized) { fit(); setViewReady(true); }
+  }, [sized, fit]);
   const moveView = useCallback((update: (v: Viewport) => Viewport) => {
     fitted.current = true;
     setViewport(update);
@@ -104,7 +110,7 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
           {!readOnly ? <ToolRail active={toolId} onPick={setToolId} /> : null}
           <div className="flex min-h-0 min-w-0 flex-1 flex-col">
             <div ref={canvas.ref} className="relative min-h-0 flex-1" onPointerDownCapture={() => { fitted.current = true; }}>
-              <PlanCanvas
+              {viewReady ? <PlanCanvas
                 ref={canvasRef}
                 plan={plan}
                 basePlan={basePlan}
@@ -118,10 +124,11 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
                 height={canvas.height}
                 tool={tool}
                 underlaySrc={underlaySrc}
+                pinReadings={pins.texts}
                 onKeyDown={onKeyDown}
                 label={`Plan of ${title}. Use the tools on the left; the list of elements offers the same edits by keyboard.`}
                 cursor={readOnly ? "grab" : cursors[toolId] ?? "crosshair"}
-              />
+              /> : null}
               <UnderlayPicker ui={underlayUi} plan={plan} store={store} viewport={viewport} />
             </div>
             <StatusLine status={readOnly ? null : status} unit={plan.displayUnit} onUnit={readOnly ? undefined : (u) => store.run(setPlanUnit(u))} scale={viewport.scale} problems={counts} onProblems={() => setSide("problems")} hint={hint} onConflict={() => setConflictOpen(true)} />
@@ -136,7 +143,7 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
             ))}
           </div>
           <div role="tabpanel" key={side} className="min-h-0 flex-1 overflow-y-auto">
-            {side === "details" ? (readOnly ? <p className="p-4 text-sm text-muted">This plan is shared with you to read. Select the Paths tab to see where the sound gets through.</p> : <DetailsPanel plan={plan} selection={selection} store={store} problems={problems} />) : null}
+            {side === "details" ? (readOnly ? <p className="p-4 text-sm text-muted">This plan is shared with you to read. Select the Paths tab to see where the sound gets through.</p> : <DetailsPanel plan={plan} selection={selection} store={store} problems={problems} pins={{ projectId, readings: pins.byPin }} />) : null}
             {side === "elements" ? (
               <>
                 {!readOnly ? <AddRoomForm plan={plan} levelId={levelId} store={store} /> : null}

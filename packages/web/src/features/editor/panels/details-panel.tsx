@@ -8,8 +8,9 @@ import { GapDetails, LeafDetails } from "./opening-details";
 import { DuctDetails, NoteDetails, PinDetails, VentDetails, VoidDetails } from "./other-details";
 import { cautionsFor } from "./cautions";
 import { elementTitle } from "./element-title";
+import type { PinReading } from "../model/pin-readings";
 
-function Body({ plan, id, store }: { plan: Plan; id: string; store: EditorStore }) {
+function Body({ plan, id, store, pins }: { plan: Plan; id: string; store: EditorStore; pins?: PinContext | undefined }) {
   const el = plan.elements[id];
   const unit = plan.displayUnit;
   if (!el) {
@@ -24,7 +25,7 @@ function Body({ plan, id, store }: { plan: Plan; id: string; store: EditorStore 
     case "vent": return <VentDetails el={el} store={store} />;
     case "duct": return <DuctDetails el={el} store={store} />;
     case "void": return <VoidDetails el={el} store={store} />;
-    case "pin": return <PinDetails el={el} store={store} />;
+    case "pin": return <PinDetails el={el} store={store} reading={pins?.readings.get(el.id)} projectId={pins?.projectId} />;
     case "note": return <NoteDetails el={el} store={store} />;
     default: return null;
   }
@@ -39,8 +40,11 @@ function duplicate(store: EditorStore, plan: Plan, ids: readonly string[]): void
   if (store.run(cmd)) store.select(newIds.filter((id) => own.some((o) => plan.elements[o]?.type === store.plan.elements[id]?.type)));
 }
 
+/** What a selected pin shows besides its label: its latest reading and the project it links into. */
+export interface PinContext { projectId: string; readings: ReadonlyMap<string, PinReading> }
+
 /** The right-hand panel: details of the selection, its problems and the cautions that apply. */
-export function DetailsPanel({ plan, selection, store, problems }: { plan: Plan; selection: readonly string[]; store: EditorStore; problems: readonly Problem[] }) {
+export function DetailsPanel({ plan, selection, store, problems, pins }: { plan: Plan; selection: readonly string[]; store: EditorStore; problems: readonly Problem[]; pins?: PinContext }) {
   if (selection.length === 0) {
     return (
       <div className="p-4 text-[15px]">
@@ -88,7 +92,7 @@ export function DetailsPanel({ plan, selection, store, problems }: { plan: Plan;
           ))}
         </ul>
       ) : null}
-      <Body plan={plan} id={id} store={store} />
+      <Body plan={plan} id={id} store={store} pins={pins} />
       {cautions.length ? (
         <div className="flex flex-col gap-2" aria-label="Cautions">
           {cautions.map((c) => (

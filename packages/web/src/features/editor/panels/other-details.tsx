@@ -1,6 +1,9 @@
 import type { EditorStore } from "@hushmark/editor-core";
 import { setProperties } from "@hushmark/editor-core";
 import { constructionCatalogue, type Duct, type Note, type Pin, type Vent, type Void as PlanVoid } from "@hushmark/floorplan";
+import { Link } from "react-router-dom";
+import { paths } from "../../../config/paths";
+import type { PinReading } from "../model/pin-readings";
 import { CommitInput, SelectField, readNumber } from "./commit-input";
 
 const num = (v: string, ok: (n: number) => boolean) => { const n = readNumber(v); return n !== null && ok(n) ? n : null; };
@@ -41,8 +44,40 @@ export function VoidDetails({ el, store }: { el: PlanVoid; store: EditorStore })
   );
 }
 
-export function PinDetails({ el, store }: { el: Pin; store: EditorStore }) {
-  return <CommitInput label="Label" value={el.label} onCommit={(v) => store.run(setProperties(el.id, { label: v }, "rename pin"))} />;
+export function PinDetails({ el, store, reading, projectId }: { el: Pin; store: EditorStore; reading?: PinReading | undefined; projectId?: string | undefined }) {
+  return (
+    <div className="flex flex-col gap-3">
+      <CommitInput label="Label" value={el.label} onCommit={(v) => store.run(setProperties(el.id, { label: v }, "rename pin"))} />
+      <PinReadingCard reading={reading} projectId={projectId} />
+    </div>
+  );
+}
+
+const hzText = (hz: number) => (hz >= 1000 ? `${hz / 1000} kHz` : `${hz} Hz`);
+
+/** The latest measurement taken at the pin, with the way to it in Measure. */
+function PinReadingCard({ reading, projectId }: { reading?: PinReading | undefined; projectId?: string | undefined }) {
+  const measureLink = projectId ? paths.projectSection(projectId, "measure") : null;
+  if (!reading) {
+    return (
+      <p className="text-sm text-muted" data-testid="pin-reading">
+        No measurement taken here yet.{measureLink ? <> Add one in <Link className="font-medium text-brand-strong underline" to={measureLink}>Measure</Link>, pinned to this room.</> : null}
+      </p>
+    );
+  }
+  return (
+    <section aria-label="Latest reading" className="rounded-md border border-rule bg-paper px-3 py-2" data-testid="pin-reading">
+      <h3 className="text-[13px] font-semibold text-muted">Latest reading</h3>
+      <p className="mt-1 flex flex-wrap items-baseline gap-x-3 tabular-nums">
+        <span className="text-xl font-semibold">{reading.laeqDb === null ? "—" : `${reading.laeqDb.toFixed(1)} dBA`}</span>
+        {reading.peakBandHz !== null && reading.peakDb !== null ? <span className="text-sm">peaks at {hzText(reading.peakBandHz)} ({reading.peakDb.toFixed(1)} dB)</span> : null}
+      </p>
+      <p className="mt-1 text-sm text-muted">
+        {reading.label} · {new Date(reading.takenAt).toLocaleString("en-GB", { day: "numeric", month: "short", hour: "2-digit", minute: "2-digit" })}
+      </p>
+      {measureLink ? <Link className="mt-1 inline-flex min-h-10 items-center text-sm font-medium text-brand-strong underline" to={`${measureLink}?measurement=${encodeURIComponent(reading.measurementId)}`}>Open the measurement</Link> : null}
+    </section>
+  );
 }
 
 export function NoteDetails({ el, store }: { el: Note; store: EditorStore }) {
