@@ -33,6 +33,18 @@ const RECORD = `(() => {
 })()`;
 const STOP = `new Promise((resolve) => requestAnimationFrame(() => requestAnimationFrame(() => { window.__stop = true; resolve(window.__frames); })))`;
 const TWO_FRAMES = `new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r)))`;
+// Where the time goes while opening: the plan response, the Sketch's code, parsing the plan, the first draw, the next frame.
+const PHASES = `(() => {
+  const out = {};
+  for (const e of performance.getEntriesByType("resource")) {
+    if (/\\/plan$/.test(e.name)) out["plan response"] = Math.round(e.responseEnd);
+    if (/sketch-section-/.test(e.name)) out["sketch code"] = Math.round(e.responseEnd);
+    if (/canvas-/.test(e.name)) out["canvas code"] = Math.round(e.responseEnd);
+  }
+  for (const m of performance.getEntriesByType("mark")) if (m.name.startsWith("hushmark:")) out[m.name.slice(9)] = Math.round(m.startTime);
+  out["next frame"] = Math.round(performance.now());
+  return out;
+})()`;
 
 async function startRecording(page: Page): Promise<void> {
   await page.evaluate(RECORD);
@@ -47,22 +59,34 @@ const browser = await launchBrowser();
 try {
   const plan = generateSyntheticBuilding({ rooms: 800, levels: 1, seed: 2026 });
   const elements = Object.keys(plan.elements).length;
-  const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
-  await signIn(page, stack.baseUrl, "surveyor@larkspur.example");
-  const projectId = await createProject(page, stack.baseUrl, "Benchmark — synthetic building");
-  const put = await page.request.put(`${stack.baseUrl}/api/v1/projects/${projectId}/plan`, { data: { baseVersion: 0, document: plan } });
+  const first = await browser.newPage({ viewport: { width: 1280, height: 800 } });
+  await signIn(first, stack.baseUrl, "surveyor@larkspur.example");
+  const projectId = await createProject(first, stack.baseUrl, "Benchmark — synthetic building");
+  const put = await first.request.put(`${stack.baseUrl}/api/v1/projects/${projectId}/plan`, { data: { baseVersion: 0, document: plan } });
   if (!put.ok()) throw new Error(`saving the synthetic plan answered ${put.status()}: ${await put.text()}`);
 
-  // Open: from navigation to the first frame after the plan is drawn.
-  const t0 = Date.now();
-  await page.goto(`${stack.baseUrl}/projects/${projectId}/sketch`);
-  await page.getByTestId("plan-canvas").waitFor();
-  await page.waitForFunction(`Number(document.querySelector("[data-testid=plan-canvas]")?.getAttribute("data-scale")) !== 50`);
-  await page.evaluate(TWO_FRAMES);
-  const openMs = Date.now() - t0;
-  const sinceNavigation = (await page.evaluate("performance.now()")) as number;
-  const phases = (await page.evaluate(`Object.fromEntries(performance.getEntriesByType("resource").filter((e) => /plan$|\\/me$|canvas-|sketch-section-/.test(e.name)).map((e) => [e.name.replace(/^.*\\//, "").replace(/-[\\w-]{8}\\.js$/, ""), Math.round(e.responseEnd)]))`)) as Record<string, number>;
-  console.log("phases (ms since navigation, response end):", phases, "drawn at", Math.round(sinceNavigation));
+  // Open: from navigation to the first frame after the plan is drawn, on a fresh page each time
+  // (nothing of the Sketch cached), three times because the machine is shared.
+  const opens: { ms: number; phases: Record<string, number> }[] = [];
+  let page!: Page;
+  for (let run = 0; run < 3; run++) {
+    if (run > 0) {
+      await page.close();
+      page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
+      await signIn(page, stack.baseUrl, "surveyor@larkspur.example");
+    } else {
+      page = first;
+    }
+    const t0 = Date.now();
+    await page.goto(`${stack.baseUrl}/projects/${projectId}/sketch`);
+    await page.getByTestId("plan-canvas").waitFor();
+    await page.waitForFunction(`Number(document.querySelector("[data-testid=plan-canvas]")?.getAttribute("data-scale")) !== 50`);
+    await page.evaluate(TWO_FRAMES);
+    const ms = Date.now() - t0;
+    opens.push({ ms, phases: (await page.evaluate(PHASES)) as Record<string, number> });
+  }
+  const openMs = [...opens.map((o) => o.ms)].sort((a, b) => a - b)[1]!;
+  console.log("open runs (ms, and ms since navigation for each phase):", JSON.stringify(opens));
 
   // Zoom in a little so a room is large enough to grab, as a surveyor would.
   const canvas = page.getByTestId("plan-canvas");
@@ -127,12 +151,13 @@ try {
     suites: [
       {
         suite: "Plan editor frame times (headless Chromium, software rendering)",
-        note: `Synthetic building, ${elements} elements on one level (generateSyntheticBuilding, seed 2026). requestAnimationFrame intervals while each gesture runs; target p95 ≤ 20 ms. Opening the plan took ${openMs} ms from navigation to the first frame after drawing (${Math.round(sinceNavigation)} ms since navigation start, including sign-in-free page load and plan fetch).`,
+        note: `Synthetic building, ${elements} elements on one level (generateSyntheticBuilding, seed 2026). requestAnimationFrame intervals while each gesture runs; target p95 ≤ 20 ms. Opening the plan took ${openMs} ms (median of ${opens.map((o) => o.ms).join(", ")} ms on fresh pages) from navigation to the first frame after drawing; phases of the median run in ms since navigation: ${Object.entries(opens.find((o) => o.ms === openMs)!.phases).map(([k, v]) => `${k} ${v}`).join(", ")}.`,
         rows,
       },
       { suite: "Web bundle sizes per route (gzip)", note: "The entry is loaded on every page; each section adds its own chunks when opened.", rows: bundleRows(fileURLToPath(new URL("packages/web/dist", `file://${ROOT}`))) },
     ],
     openMs,
+    opens,
     elements,
   };
   writeFileSync(new URL("../bench-results.json", import.meta.url), `${JSON.stringify(result, null, 2)}\n`);

@@ -8,6 +8,16 @@ import { moveElements, setProperties } from "../commands/edit.js";
 const room = (id: string) => ({ id, levelId: "ground", name: id });
 
 describe("EditorStore", () => {
+  it("freezes a plan it is given, so a loaded plan cannot be changed behind the history's back", () => {
+    const plan = newPlan("p", "Plan");
+    const store = new EditorStore(plan);
+    expect(Object.isFrozen(store.plan.elements)).toBe(true);
+    expect(Object.isFrozen(store.plan.elements["ground"])).toBe(true);
+    const other = newPlan("q", "Other");
+    store.load(other);
+    expect(Object.isFrozen(store.plan.elements)).toBe(true);
+  });
+
   it("records a command with patches and takes it back on undo, forward on redo", () => {
     const store = new EditorStore(newPlan("p", "P"));
     const before = store.plan;
