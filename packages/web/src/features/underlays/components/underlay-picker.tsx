@@ -93,7 +93,7 @@ export function UnderlayPicker({ ui, plan, store, viewport }: { ui: UnderlayUi; 
         {pts[0] && (pts[1] ?? cursor) ? <line x1={pts[0].x} y1={pts[0].y} x2={(pts[1] ?? cursor)!.x} y2={(pts[1] ?? cursor)!.y} stroke="#c98a12" strokeWidth={2} strokeDasharray="6 4" /> : null}
         {pts.map((p, i) => <circle key={i} cx={p.x} cy={p.y} r={6} fill="none" stroke="#c98a12" strokeWidth={2.5} />)}
       </svg>
-      <div data-banner role="status" className="pointer-events-auto absolute left-1/2 top-2 flex max-w-[min(36rem,calc(100%-1rem))] -translate-x-1/2 flex-wrap items-center gap-2 rounded-md border border-rule bg-panel px-3 py-2 text-[14px] shadow-lg">
+      <div data-banner role="status" className="pointer-events-auto absolute left-1/2 top-2 flex w-max max-w-[min(36rem,calc(100%-1rem))] -translate-x-1/2 flex-wrap items-center gap-2 rounded-md border border-rule bg-panel px-3 py-2 text-[14px] shadow-lg">
         {asking ? (
           <form className="flex flex-wrap items-end gap-2" onSubmit={(e) => { e.preventDefault(); submit(); }}>
             <label className="flex flex-col gap-1 font-medium">
@@ -102,10 +102,15 @@ export function UnderlayPicker({ ui, plan, store, viewport }: { ui: UnderlayUi; 
                 className="min-h-9 w-44 rounded-md border border-rule bg-panel px-2 font-normal" aria-invalid={error ? true : undefined} />
             </label>
             <button type="submit" className="min-h-9 rounded-md bg-brand px-3 font-medium text-white">Set scale</button>
+            <button type="button" className="min-h-9 rounded-md px-2 hover:bg-ink/5" onClick={() => ui.cancel()}>Cancel</button>
             {error ? <p role="alert" className="basis-full text-sm text-danger">{error}</p> : null}
           </form>
-        ) : <span>{HINTS[pick.kind][pick.points.length === 0 ? 0 : 1]}</span>}
-        <button type="button" className="min-h-9 rounded-md px-2 hover:bg-ink/5" onClick={() => ui.cancel()}>Cancel</button>
+        ) : (
+          <>
+            <span>{HINTS[pick.kind][pick.points.length === 0 ? 0 : 1]}</span>
+            <button type="button" className="min-h-9 rounded-md px-2 hover:bg-ink/5" onClick={() => ui.cancel()}>Cancel</button>
+          </>
+        )}
       </div>
     </div>
   );
