@@ -1,5 +1,6 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
+import { useSearchParams } from "react-router-dom";
 import { Badge } from "../../components/ui/badge";
 import { Button } from "../../components/ui/button";
 import { Card, CardHeader } from "../../components/ui/card";
@@ -25,14 +26,16 @@ export default function MeasureSection({ projectId }: { projectId: string }) {
   const list = useMeasurements(projectId);
   const queryClient = useQueryClient();
   const [panel, setPanel] = useState<Panel>(null);
-  const [selected, setSelected] = useState<string | null>(null);
+  // A link from a pin on the Sketch opens its measurement (?measurement=<id>).
+  const [searchParams] = useSearchParams();
+  const [selected, setSelected] = useState<string | null>(() => searchParams.get("measurement"));
   const [compare, setCompare] = useState<string[]>([]);
   const places = usePlanPlaces(projectId);
 
   if (list.isPending) return <PageLoading label="Opening the measurements" />;
   if (list.isError) return <ErrorState title="The measurements did not load" error={list.error} onRetry={() => void list.refetch()} />;
   const measurements = list.data;
-  const current = selected ?? measurements[measurements.length - 1]?.id ?? null;
+  const current = (selected && measurements.some((m) => m.id === selected) ? selected : null) ?? measurements[measurements.length - 1]?.id ?? null;
   const refresh = () => queryClient.invalidateQueries({ queryKey: measurementKeys.all });
   const added = (id: string) => {
     void refresh();
