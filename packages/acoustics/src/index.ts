@@ -140,7 +140,7 @@ export { CONSTRUCTION_CATALOGUE, catalogueTl, stcShapedThirdOctaveTl, octaveFrom
 export type { CatalogueEntry, CatalogueTl } from "./constructions/catalogue.js";
 
 export { compileNetwork, spaceAbsorptionAt } from "./network/compile.js";
-export type { CompiledNetwork } from "./network/compile.js";
+export type { CompiledNetwork, CompileOptions } from "./network/compile.js";
 export { linkTransmittingArea, linkAreaM2, flankingKijDb, flankingRijDb, impactSourceTerm } from "./network/transmission.js";
 export { NetworkRequestError, NetworkSolveError, selectSources, buildExcitation } from "./network/excitation.js";
 export { solveEnergies, overTransmittingSpaces } from "./network/gauss-seidel.js";

@@ -6,8 +6,9 @@
 // over every band of every link — so a busier machine shifts both.
 import { writeFileSync } from "node:fs";
 import { cpus, loadavg } from "node:os";
-import { parseNetwork, solveNetwork, type Network } from "@hushmark/acoustics";
+import { compileNetwork, parseNetwork, solveCompiled, type Network } from "@hushmark/acoustics";
 import { buildNetwork, constructionCatalogue, generateSyntheticBuilding, sourceSpectrum } from "../src/index.js";
+import { linkTauSM2 } from "../src/builder/transmitting-area.js";
 
 const ROOMS = 500, LEVELS = 3, SEED = 7, WARMUP = 3;
 const RUNS = Number(process.env.BENCH_RUNS ?? 30);
@@ -50,7 +51,8 @@ for (let i = 0; i < WARMUP + runs; i++) {
   const built = buildNetwork(plan, constructionCatalogue, { sources: [source] });
   if (!built.ok) throw new Error(built.problems[0]!.message);
   const t1 = performance.now();
-  const result = solveNetwork(built.network, { receiver });
+  // As solvePlan does: the builder's τS per link is handed to the compiler.
+  const { result } = solveCompiled(compileNetwork(built.network, { transmittingArea: linkTauSM2 }), { receiver });
   const t2 = performance.now();
   const parsed = parseNetwork(built.network);
   if (!parsed.ok) throw new Error(parsed.issues[0]!.message);

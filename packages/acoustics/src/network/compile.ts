@@ -4,7 +4,7 @@
  * the adjacency in compressed rows.
  */
 import { bandCount, type BandSetId } from "../bands/bands.js";
-import type { Network, Space } from "./schema.js";
+import type { Link, Network, Space } from "./schema.js";
 import { bandValue, linkTransmittingArea } from "./transmission.js";
 
 export interface CompiledNetwork {
@@ -63,8 +63,16 @@ function buildAdjacency(n: number, linkA: Int32Array, linkB: Int32Array) {
   return { adjStart, adjNode, adjLink };
 }
 
+export interface CompileOptions {
+  /**
+   * τ·S per band of a link when the caller already has it from `linkTransmittingArea` (a
+   * builder that sized absorption with it); undefined computes it here.
+   */
+  readonly transmittingArea?: (link: Link) => ArrayLike<number> | undefined;
+}
+
 /** Compile a parsed (valid) network. */
-export function compileNetwork(network: Network): CompiledNetwork {
+export function compileNetwork(network: Network, options: CompileOptions = {}): CompiledNetwork {
   const B = bandCount(network.bands);
   const n = network.spaces.length;
   const m = network.links.length;
@@ -82,7 +90,8 @@ export function compileNetwork(network: Network): CompiledNetwork {
   network.links.forEach((link, l) => {
     linkA[l] = spaceIndex.get(link.between[0]) as number;
     linkB[l] = spaceIndex.get(link.between[1]) as number;
-    weight.set(linkTransmittingArea(link, B), l * B);
+    const known = options.transmittingArea?.(link);
+    weight.set(known && known.length === B ? known : linkTransmittingArea(link, B), l * B);
   });
   const linkIds = network.links.map((l) => l.id);
   return {

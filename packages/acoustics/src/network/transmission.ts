@@ -82,6 +82,23 @@ export function linkTransmittingArea(link: Link, bands: number): Float64Array {
     for (const p of link.parts) addPartTransmittingArea(p, out);
     return out;
   }
+  if (link.type === "flanking" && !Array.isArray(link.kij_db)) {
+    // K_ij from the junction formula (or one given number) is the same in every band: work it
+    // out once. Flanking paths are most of a large building's links.
+    const kijDb = flankingKijDb(link, 0);
+    for (let b = 0; b < bands; b++) {
+      const rij = flankingReductionIndexDb({
+        riDb: link.element_i.tl_db[b] as number,
+        rjDb: link.element_j.tl_db[b] as number,
+        deltaRDb: bandValue(link.delta_r_db, b),
+        kijDb,
+        separatingAreaM2: link.separating_area_m2,
+        couplingLengthM: link.coupling_length_m,
+      });
+      out[b] = link.separating_area_m2 * tauOfTl(rij);
+    }
+    return out;
+  }
   for (let b = 0; b < bands; b++) out[b] = linkTransmittingAreaAt(link, b);
   return out;
 }

@@ -1,5 +1,6 @@
 import { compileNetwork, solveCompiled, type SolveResult, type Target as EngineTarget } from "@hushmark/acoustics";
 import { buildNetwork } from "../builder/build-network.js";
+import { linkTauSM2 } from "../builder/transmitting-area.js";
 import type { BuildResult } from "../builder/types.js";
 import { sourceSpectrum } from "../catalogue/sources.js";
 import type { Catalogue } from "../catalogue/types.js";
@@ -86,7 +87,7 @@ export function preparePlanNetwork(plan: Plan, catalogue: Catalogue, request: Pi
 /**
  * Builds, solves and maps back one analysis of a plan, with exact gains for the strongest wall
  * parts (levels in dB, shares 0–1, gains in dB(A)). The builder's network already has the
- * engine's parsed shape, so it is compiled without a second schema pass.
+ * engine's parsed shape and its links' τS, so it is compiled without a second schema pass.
  */
 export function solvePlan(plan: Plan, catalogue: Catalogue, request: SolvePlanRequest): SolvePlanResult {
   const prepared = preparePlanNetwork(plan, catalogue, request);
@@ -94,7 +95,9 @@ export function solvePlan(plan: Plan, catalogue: Catalogue, request: SolvePlanRe
   const { built, sourceId } = prepared;
   const rx = plan.elements[request.receiver];
   const target = request.target === null ? undefined : request.target ?? (rx?.type === "room" ? rx.target : undefined);
-  const { result, solved } = solveCompiled(compileNetwork(built.network), {
+  // The builder already worked out every link's τS (by the engine's formula) to size absorption.
+  const compiled = compileNetwork(built.network, { transmittingArea: linkTauSM2 });
+  const { result, solved } = solveCompiled(compiled, {
     receiver: request.receiver,
     k: request.k ?? 10,
     ...(request.gains !== undefined ? { gains: request.gains } : {}),

@@ -2,8 +2,8 @@
 // on its own: these tests hold both to what the strict path and plain linear algebra give.
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { flankingKijDb, parseNetwork, type FlankingLink } from "@hushmark/acoustics";
-import { denseLevels } from "../../../acoustics/test/dense-reference.js";
+import { parseNetwork } from "@hushmark/acoustics";
+import { denseLevels } from "../../test/dense-levels.js";
 import { buildNetwork } from "../builder/build-network.js";
 import { constructionCatalogue } from "../catalogue/catalogue.js";
 import { demoPlans } from "../demo/demo-plans.js";
@@ -48,15 +48,9 @@ describe("solvePlan against dense linear algebra on a synthetic building", () =>
     const rooms = elementsOfType(plan, "room");
     const r = solvePlan(plan, constructionCatalogue, { source: { spaceId: rooms[0]!.id, spectrumId: "music-amplified-bass" }, receiver: rooms.at(-1)!.id, k: 3 });
     if (!r.ok) throw new Error(r.problems[0]!.message);
-    // The reference takes flanking links with their K_ij given, so it computes every τS itself.
-    const raw = structuredClone(r.built.network);
-    for (const link of raw.links) {
-      if (link.type !== "flanking") continue;
-      expect(link.delta_r_db).toBeUndefined();
-      link.kij_db = Array.from({ length: 21 }, (_, b) => flankingKijDb(link as FlankingLink, b));
-    }
+    const raw = r.built.network;
     expect(raw.links.some((l) => l.type === "flanking")).toBe(true);
-    const dense = denseLevels(raw, 21);
+    const dense = denseLevels(raw);
     let compared = 0;
     for (const s of r.result.spaces) {
       const expected = dense.get(s.id)!;
@@ -68,5 +62,14 @@ describe("solvePlan against dense linear algebra on a synthetic building", () =>
       });
     }
     expect(compared).toBeGreaterThan(90 * 21 * 0.9);
+    // The exact gain of the two strongest links: a dense re-solve without each of them.
+    const rx = r.result.receiver;
+    for (const link of r.result.links.slice(0, 2)) {
+      expect(link.gainIfPerfectByBandDb).toBeDefined();
+      const without = denseLevels({ ...raw, links: raw.links.filter((l) => l.id !== link.id) }).get(rx)!;
+      link.gainIfPerfectByBandDb!.forEach((g, b) => {
+        if (r.result.levelsDb[b]! > -150) expect(Math.abs(g - (r.result.levelsDb[b]! - without[b]!)), `${link.id} band ${b}`).toBeLessThan(1e-6);
+      });
+    }
   });
 });

@@ -22,7 +22,10 @@ import { linkTauSM2 } from "./transmitting-area.js";
  * ducts and flanking paths as links, each with `ref` the plan element it came from. A plan with
  * errors is not built: its problems are returned instead. Units as in the network format.
  */
-export function buildNetwork(plan: Plan, catalogue: Catalogue, options: BuildOptions = {}): BuildResult {
+export function buildNetwork(given: Plan, catalogue: Catalogue, options: BuildOptions = {}): BuildResult {
+  // A frozen copy of the element record (not of the elements) lets every step share one sorted
+  // per-type list for this build; the caller's plan is left as it is.
+  const plan: Plan = Object.isFrozen(given.elements) ? given : { ...given, elements: Object.freeze({ ...given.elements }) };
   const pieces = planWallPieces(plan);
   const problems = validatePlan(plan, catalogue, pieces);
   if (!planIsAnalysable(problems)) return { ok: false, problems };

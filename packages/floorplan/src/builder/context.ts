@@ -13,6 +13,15 @@ export interface BuildContext {
   levels: Level[];
   rooms: Map<string, Room>;
   freeWalls: FreeWall[];
+  /** Resolved settings per wall piece id: the walls and the flanking paths ask for the same pieces many times. */
+  settings: Map<string, PieceSettings>;
+}
+
+/** A wall piece's construction, thickness and height (m). */
+export interface PieceSettings {
+  construction: Construction;
+  thicknessM: number;
+  heightM: number;
 }
 
 /** The shared look-ups of one build: levels by elevation, rooms by id, free walls (no unit). */
@@ -24,6 +33,7 @@ export function buildContext(plan: Plan, catalogue: Catalogue, pieces: WallPiece
     levels: levelsByElevation(plan),
     rooms: new Map(elementsOfType(plan, "room").map((r) => [r.id, r])),
     freeWalls: [...elementsOfType(plan, "wall")],
+    settings: new Map(),
   };
 }
 
@@ -51,7 +61,16 @@ export function freeWallAlong(ctx: BuildContext, piece: WallPiece): FreeWall | u
 }
 
 /** Resolved settings of one wall piece: construction, thickness and height (m). */
-export function pieceSettings(ctx: BuildContext, piece: WallPiece): { construction: Construction; thicknessM: number; heightM: number } {
+export function pieceSettings(ctx: BuildContext, piece: WallPiece): PieceSettings {
+  let hit = ctx.settings.get(piece.id);
+  if (!hit) {
+    hit = resolvePieceSettings(ctx, piece);
+    ctx.settings.set(piece.id, hit);
+  }
+  return hit;
+}
+
+function resolvePieceSettings(ctx: BuildContext, piece: WallPiece): PieceSettings {
   const set = ctx.plan.wallSettings[piece.id] ?? {};
   const free = freeWallAlong(ctx, piece);
   const d = ctx.plan.defaults;

@@ -11,7 +11,7 @@ const cache = new WeakMap<object, Float64Array>();
  * the fields the schema would default (`type`, flanking `path`), so its links already have the
  * parsed shape and need no schema pass.
  */
-export function linkTauSM2(link: LinkInput): Float64Array {
+export function linkTauSM2(link: Link | LinkInput): Float64Array {
   let hit = cache.get(link);
   if (!hit) {
     hit = linkTransmittingArea(link as Link, BAND_COUNT);
