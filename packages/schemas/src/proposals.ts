@@ -54,6 +54,8 @@ export const proposalContentSchema = z.object({
   cautions: z.array(cautionSchema),
   disclaimer: z.string(),
   planVersion: z.number().int(),
+  /** Each plan element's share of the sound at the receiver (0–1) now and after the work, for the client's marked-up plan; absent on older versions. */
+  planShares: z.object({ before: z.record(z.string(), z.number()), after: z.record(z.string(), z.number()) }).optional(),
 });
 export type ProposalContent = z.infer<typeof proposalContentSchema>;
 

@@ -39,7 +39,7 @@ describe("proposal PDFs and closing reports in object storage", () => {
   let storage: ObjectStorage;
   let s3: S3Client;
   let proposalId: string;
-  let content: { total: number; subtotal: number; lines: { description: string; amount: number }[] };
+  let content: { total: number; subtotal: number; lines: { description: string; amount: number }[]; planShares: { before: Record<string, number>; after: Record<string, number> } };
 
   /** Keys of the project's objects in the store, and its file records that are PDFs. */
   const objects = async () => ((await s3.send(new ListObjectsV2Command({ Bucket: BUCKET, Prefix: `projects/${p.projectId}/` }))).Contents ?? []).map((o) => o.Key!);
@@ -84,6 +84,15 @@ describe("proposal PDFs and closing reports in object storage", () => {
     const columns: { column_name: string }[] = await h.dataSource.query(`SELECT column_name FROM information_schema.columns WHERE table_name = 'proposal_versions'`);
     expect(columns.map((c) => c.column_name)).not.toContain("pdf");
     expect(columns.map((c) => c.column_name)).toContain("pdf_file_id");
+  });
+
+  it("keeps each element's share before and after the work for the client's plan: the upgraded door lets through less", () => {
+    const { before, after } = content.planShares;
+    expect(Object.keys(before).length).toBeGreaterThan(5);
+    expect(Object.keys(after).sort()).toEqual(Object.keys(before).sort());
+    // Each is a fraction of the energy at the receiver.
+    for (const v of [...Object.values(before), ...Object.values(after)]) expect(v >= 0 && v <= 1).toBe(true);
+    expect(after["door-studio"]!).toBeLessThan(before["door-studio"]!);
   });
 
   it("a rerun of the job stores nothing more, and two runs racing leave one object", async () => {

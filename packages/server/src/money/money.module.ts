@@ -51,7 +51,7 @@ export function createMoneyModule(deps: { dataSource: DataSource; config: AppCon
   let proposals: ProposalsService;
   const workOrders = createWorkOrdersService(dataSource, { projects, proposals: () => proposals, files });
   proposals = createProposalsService(dataSource, {
-    projects, scenarios, priceBook, mailer, files, publicUrl: config.publicUrl,
+    projects, scenarios, priceBook, mailer, files, catalogue, publicUrl: config.publicUrl,
     hooks: {
       renderPdf: async (proposalId, version) => {
         await jobs.send(PROPOSAL_PDF_QUEUE, { proposalId, version });

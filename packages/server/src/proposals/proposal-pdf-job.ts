@@ -1,13 +1,10 @@
 import type { Logger } from "pino";
 import type { DataSource } from "typeorm";
-import { proposalContentSchema, scenarioSetupSchema, type PriceBookItem } from "@hushmark/schemas";
+import { proposalContentSchema, scenarioSetupSchema } from "@hushmark/schemas";
 import type { CatalogueService } from "../catalogue/catalogue.service.js";
 import type { FilesService } from "../files/files.service.js";
 import type { QueueSpec } from "../jobs/job-queue.js";
-import { PriceBookItem as PriceBookItemRow } from "../price-book/price-book-item.entity.js";
-import { itemDto } from "../price-book/price-book.service.js";
-import { plannerFor } from "../scenarios/scenario-evaluate.js";
-import { elementShares } from "./plan-drawing.js";
+import { planShares } from "./plan-shares.js";
 import { renderProposalPdf } from "./proposal-pdf.js";
 import { ProposalVersionRow } from "./proposal-version.entity.js";
 import { ProposalRow } from "./proposal.entity.js";
@@ -33,19 +30,9 @@ export async function renderProposalVersion(dataSource: DataSource, catalogues: 
   const content = proposalContentSchema.parse(v.content);
   const setup = scenarioSetupSchema.parse(v.scenarioSnapshot.setup);
   const { catalogue } = await catalogues.catalogueFor(proposal.organizationId);
-  const ids = [...new Set(v.scenarioSnapshot.items.map((i) => i.priceBookItemId))];
-  const rows = ids.length ? await dataSource.getRepository(PriceBookItemRow).createQueryBuilder("i").where("i.id IN (:...ids)", { ids }).getMany() : [];
-  const book = new Map<string, PriceBookItem>(rows.map((r) => [r.id, itemDto(r)]));
-  const picks = v.scenarioSnapshot.items.flatMap((i, k) => {
-    const item = book.get(i.priceBookItemId);
-    return item ? [{ key: `u${k}`, item, elementId: i.elementId }] : [];
-  });
-  const built = plannerFor(v.planDocument, setup, picks, catalogue);
-  const prepared = built.ok ? built.value.prepared : null;
+  const { prepared, before, after } = await planShares(dataSource, catalogue, v.planDocument, setup, v.scenarioSnapshot.items);
   const markers = new Map<string, number>();
   for (const l of content.evaluation.lines) if (!markers.has(l.elementId)) markers.set(l.elementId, markers.size + 1);
-  const before = prepared ? elementShares(prepared, setup.receiverId) : new Map<string, number>();
-  const after = prepared && built.ok ? elementShares(prepared, setup.receiverId, built.value.planner.prepared.map((p) => p.option)) : new Map<string, number>();
   const pdf = await renderProposalPdf({ content, version: job.version, prepared, receiverId: setup.receiverId, sharesBefore: before, sharesAfter: after, markers });
   const file = await files.store({ organizationId: proposal.organizationId, userId: null }, proposal.projectId, files.fromBuffer(pdf, { contentType: "application/pdf", originalName: `proposal-${proposal.id.slice(0, 8)}-v${job.version}.pdf` }));
   const taken = await versions

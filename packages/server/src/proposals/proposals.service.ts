@@ -4,6 +4,7 @@ import { proposalContentSchema, STAFF_ROLES, type Proposal, type ProposalContent
 import type { Actor } from "../auth/actor.js";
 import { recordAudit } from "../audit/audit.js";
 import { HttpError, conflict, notFound } from "../http/errors.js";
+import type { CatalogueService } from "../catalogue/catalogue.service.js";
 import type { FilesService } from "../files/files.service.js";
 import { StoredFile } from "../files/stored-file.entity.js";
 import { linkMail, type Mailer } from "../mail/mailer.js";
@@ -13,6 +14,7 @@ import { planDocumentAt } from "../scenarios/plan-at-version.js";
 import type { ScenariosService } from "../scenarios/scenarios.service.js";
 import { PaymentRow } from "../payments/payment.entity.js";
 import { ProposalCommentRow } from "./proposal-comment.entity.js";
+import { planShares, sharesRecord } from "./plan-shares.js";
 import { proposalContent } from "./proposal-content.js";
 import { ProposalVersionRow } from "./proposal-version.entity.js";
 import { ProposalRow } from "./proposal.entity.js";
@@ -27,7 +29,7 @@ export interface ProposalHooks {
 const isStaff = (actor: Actor) => STAFF_ROLES.includes(actor.role);
 
 /** Proposals: versions frozen when sent, the client's comments and decision, and what the firm and the client see of them. */
-export function createProposalsService(dataSource: DataSource, deps: { projects: ProjectsService; scenarios: ScenariosService; priceBook: PriceBookService; mailer: Mailer; files: FilesService; publicUrl: string; hooks: ProposalHooks }) {
+export function createProposalsService(dataSource: DataSource, deps: { projects: ProjectsService; scenarios: ScenariosService; priceBook: PriceBookService; mailer: Mailer; files: FilesService; catalogue: CatalogueService; publicUrl: string; hooks: ProposalHooks }) {
   const proposals = dataSource.getRepository(ProposalRow);
   const versions = dataSource.getRepository(ProposalVersionRow);
   const comments = dataSource.getRepository(ProposalCommentRow);
@@ -81,8 +83,13 @@ export function createProposalsService(dataSource: DataSource, deps: { projects:
     const fresh = await scenarios.update(actor, projectId, scenarioId, {});
     const project = await projects.get(actor, projectId);
     const settings = await priceBook.settings(actor.organizationId);
-    const content = proposalContent({ title, note, project, firmName: actor.organizationName, settings, evaluation: fresh.evaluation!, planVersion: fresh.setup.planVersion, today: new Date(), ...(validUntil ? { validUntil } : {}) });
     const planDocument = await planDocumentAt(dataSource, projectId, fresh.setup.planVersion);
+    const { catalogue } = await deps.catalogue.catalogueFor(actor.organizationId);
+    const shares = await planShares(dataSource, catalogue, planDocument, fresh.setup, fresh.items);
+    const content = {
+      ...proposalContent({ title, note, project, firmName: actor.organizationName, settings, evaluation: fresh.evaluation!, planVersion: fresh.setup.planVersion, today: new Date(), ...(validUntil ? { validUntil } : {}) }),
+      planShares: { before: sharesRecord(shares.before), after: sharesRecord(shares.after) },
+    };
     return { content, planDocument, snapshot: { setup: fresh.setup as unknown as Record<string, unknown>, items: fresh.items } };
   }
 

@@ -14,6 +14,7 @@ import { useSaveScenario, useScenarios, useWeakLinks } from "./api/scenarios";
 import { BestSearch, SingleRanking } from "./components/best-search";
 import { ScenarioComparison } from "./components/comparison";
 import { FrontierChart } from "./components/frontier-chart";
+import { PlanPick } from "./components/plan-pick";
 import { EvaluationSummary, ScenarioBuilder } from "./components/scenario-builder";
 import { defaultSetup, SetupFields } from "./components/setup-fields";
 import { WeakLinks } from "./components/weak-links";
@@ -47,6 +48,8 @@ function OptionsScreen({ projectId, document, initial, items, currency }: { proj
   const elementNames = useMemo(() => new Map((weak.data?.elements ?? []).map((e) => [e.elementId, e.name])), [weak.data]);
   const onResult = useCallback((r: OptionSearchResult | null) => setSearchResult(r), []);
   const mine = (scenarios.data?.scenarios ?? []).filter((s) => s.setup.receiverId === setup.receiverId);
+  const toggle = (id: string) => setChosen((c) => { const n = new Set(c); if (n.has(id)) n.delete(id); else n.add(id); return n; });
+  const add = (elementId: string, itemId: string) => setDraft((d) => ({ ...d, items: [...d.items, { priceBookItemId: itemId, elementId }] }));
 
   async function saveDraft() {
     setSaveError(null);
@@ -82,14 +85,21 @@ function OptionsScreen({ projectId, document, initial, items, currency }: { proj
         <CardHeader title="What to make quieter" description="The noise, where it starts, the room that should be quiet and its target." />
         <div className="p-5"><SetupFields document={document} setup={setup} onChange={(s) => { setSetup(s); setChosen(new Set()); }} /></div>
       </Card>
+      <Card>
+        <CardHeader title="Pick on the plan" description="Click a wall part, door, window, vent or room to upgrade it." />
+        <div className="p-5">
+          {weak.isPending ? <Spinner label="Working out the paths" /> : weak.isError ? <p role="alert" className="text-sm text-danger">{weak.error.message}</p> : (
+            <PlanPick document={document} elements={weak.data.elements} receiverId={setup.receiverId} receiverName={weak.data.receiver.name} items={items} currency={currency} chosen={chosen}
+              onToggle={toggle} onAdd={add} />
+          )}
+        </div>
+      </Card>
       <div className="grid gap-5 lg:grid-cols-[3fr_2fr]">
         <Card>
           <CardHeader title="Where the sound gets through" description={weak.data ? `${weak.data.receiver.dba.toFixed(1)} dBA reaches ${weak.data.receiver.name} now (NC ${weak.data.receiver.nc ?? "—"}).` : "The weakest links first."} />
           <div className="px-5 py-2">
             {weak.isPending ? <Spinner label="Working out the paths" /> : weak.isError ? <p role="alert" className="text-sm text-danger">{weak.error.message}</p> : (
-              <WeakLinks elements={weak.data.elements} items={items} currency={currency} chosen={chosen}
-                onToggle={(id) => setChosen((c) => { const n = new Set(c); if (n.has(id)) n.delete(id); else n.add(id); return n; })}
-                onAdd={(elementId, itemId) => setDraft((d) => ({ ...d, items: [...d.items, { priceBookItemId: itemId, elementId }] }))} />
+              <WeakLinks elements={weak.data.elements} items={items} currency={currency} chosen={chosen} onToggle={toggle} onAdd={add} />
             )}
           </div>
         </Card>

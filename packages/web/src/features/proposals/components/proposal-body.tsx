@@ -1,6 +1,6 @@
 import type { Proposal } from "@hushmark/schemas";
 import { formatMoney, levelWords } from "../../price-book/components/money";
-import { PlanSketch } from "./plan-sketch";
+import { ProposalPlan } from "./proposal-plan";
 
 /** What the client reads: the expected improvement in plain words, the marked-up plan, the price, the cautions. */
 export function ProposalBody({ proposal, document }: { proposal: Proposal; document: Record<string, unknown> | null }) {
@@ -22,7 +22,7 @@ export function ProposalBody({ proposal, document }: { proposal: Proposal; docum
       {document ? (
         <section aria-labelledby="plan-h">
           <h3 id="plan-h" className="mb-1 text-base font-semibold">Where the work goes</h3>
-          <PlanSketch document={document} receiverId={ev.receiver.id} marked={marked} />
+          <ProposalPlan content={c} document={document} />
           <ol className="mt-2 list-decimal pl-5 text-sm">
             {marked.map((id) => <li key={id}>{ev.lines.find((l) => l.elementId === id)?.elementName}: {ev.lines.filter((l) => l.elementId === id).map((l) => l.name).join(", ")}</li>)}
           </ol>

@@ -20,7 +20,7 @@ export function ScenarioBuilder({ name, items, book, elementNames, onName, onRem
         Scenario name
         <input className="min-h-11 rounded-md border border-rule bg-panel px-3 text-[15px]" value={name} onChange={(e) => onName(e.target.value)} />
       </label>
-      {items.length === 0 ? <p className="text-sm text-muted">Add upgrades from the list of weak links, or run “Best within limits” and keep its answer.</p> : null}
+      {items.length === 0 ? <p className="text-sm text-muted">Add upgrades from the list of weak links or by picking an element on the plan, or run “Best within limits” and keep its answer.</p> : null}
       <ol className="flex flex-col gap-1.5">
         {items.map((it, i) => (
           <li key={`${it.priceBookItemId}-${it.elementId}-${i}`} className="flex items-center justify-between gap-2 rounded-md border border-rule px-3 py-1.5 text-sm">

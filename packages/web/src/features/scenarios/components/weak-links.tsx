@@ -16,7 +16,6 @@ export function WeakLinks({ elements, items, currency, chosen, onToggle, onAdd }
   return (
     <ul className="divide-y divide-rule" aria-label="Where the sound gets through">
       {rows.map((e) => {
-        const fits = items.filter((i) => i.active && i.appliesTo.includes(e.kind as PriceBookItem["appliesTo"][number]));
         return (
           <li key={e.elementId} className="flex flex-wrap items-center gap-3 py-2.5">
             <label className="flex min-h-11 min-w-0 flex-1 items-center gap-3">
@@ -31,23 +30,31 @@ export function WeakLinks({ elements, items, currency, chosen, onToggle, onAdd }
             <span className="h-2 w-24 overflow-hidden rounded bg-rule" aria-hidden="true">
               <span className="block h-full bg-danger" style={{ width: `${Math.min(100, e.share * 100)}%` }} />
             </span>
-            <select
-              className="min-h-11 max-w-64 rounded-md border border-rule bg-panel px-2 text-sm"
-              value=""
-              aria-label={`Add an upgrade on ${e.name}`}
-              disabled={fits.length === 0}
-              onChange={(ev) => ev.target.value && onAdd(e.elementId, ev.target.value)}
-            >
-              <option value="">{fits.length ? "Add an upgrade…" : "No upgrade fits"}</option>
-              {fits.map((i) => (
-                <option key={i.id} value={i.id}>
-                  {i.name} ({formatMoney(i.costs.fixedMaterials + i.costs.fixedLabour + i.costs.perItemMaterials + i.costs.perItemLabour, currency)}{i.costs.perM2Materials + i.costs.perM2Labour > 0 ? ` + ${formatMoney(i.costs.perM2Materials + i.costs.perM2Labour, currency)}/m²` : ""})
-                </option>
-              ))}
-            </select>
+            <UpgradeSelect element={e} items={items} currency={currency} onAdd={onAdd} />
           </li>
         );
       })}
     </ul>
+  );
+}
+
+/** The price book upgrades that fit an element, as a picker that adds the chosen one. */
+export function UpgradeSelect({ element: e, items, currency, onAdd }: { element: Pick<Element, "elementId" | "kind" | "name">; items: PriceBookItem[]; currency: string; onAdd: (elementId: string, itemId: string) => void }) {
+  const fits = items.filter((i) => i.active && i.appliesTo.includes(e.kind as PriceBookItem["appliesTo"][number]));
+  return (
+    <select
+      className="min-h-11 max-w-64 rounded-md border border-rule bg-panel px-2 text-sm"
+      value=""
+      aria-label={`Add an upgrade on ${e.name}`}
+      disabled={fits.length === 0}
+      onChange={(ev) => ev.target.value && onAdd(e.elementId, ev.target.value)}
+    >
+      <option value="">{fits.length ? "Add an upgrade…" : "No upgrade fits"}</option>
+      {fits.map((i) => (
+        <option key={i.id} value={i.id}>
+          {i.name} ({formatMoney(i.costs.fixedMaterials + i.costs.fixedLabour + i.costs.perItemMaterials + i.costs.perItemLabour, currency)}{i.costs.perM2Materials + i.costs.perM2Labour > 0 ? ` + ${formatMoney(i.costs.perM2Materials + i.costs.perM2Labour, currency)}/m²` : ""})
+        </option>
+      ))}
+    </select>
   );
 }
