@@ -71,7 +71,8 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
         directives: {
           defaultSrc: ["'self'"],
           baseUri: ["'none'"],
-          scriptSrc: ["'self'"],
+          // 'wasm-unsafe-eval' lets the IFC import's worker compile its WebAssembly reader; JavaScript eval stays blocked.
+          scriptSrc: ["'self'", "'wasm-unsafe-eval'"],
           styleSrc: ["'self'", "'unsafe-inline'"],
           imgSrc: ["'self'", "data:", "blob:"],
           fontSrc: ["'self'"],

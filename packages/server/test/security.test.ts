@@ -13,6 +13,7 @@ describe("headers and cross-site requests", () => {
     const csp = res.headers["content-security-policy"] as string;
     expect(csp).toContain("script-src 'self'");
     expect(csp).not.toMatch(/script-src[^;]*unsafe-inline/);
+    expect(csp).not.toMatch(/script-src[^;]*'unsafe-eval'/);
     expect(csp).toContain("base-uri 'none'");
     expect(csp).toContain("frame-ancestors 'none'");
     expect(csp).toContain("object-src 'none'");
