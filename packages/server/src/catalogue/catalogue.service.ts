@@ -21,20 +21,56 @@ function dto(c: Construction, origin: ConstructionDto["origin"]): ConstructionDt
 let builtIn: ConstructionDto[] | undefined;
 const builtInDtos = () => (builtIn ??= Object.values(constructionCatalogue.constructions).map((c) => dto(c, "built-in")));
 
+/** A firm's catalogue for the builder, and a digest of its own entries (part of analysis cache keys). */
+export interface FirmCatalogue {
+  catalogue: Catalogue;
+  extra: Construction[];
+  digest: string;
+}
+
+/** Firms whose catalogue one process keeps in memory; beyond this the least recently used is dropped. */
+const MEMO_FIRMS = 500;
+
+/** Bumps the firm's constructions version in the same transaction as the change it stands for. */
+const BUMP_VERSION = "UPDATE organizations SET constructions_version = constructions_version + 1 WHERE id = $1";
+
 /** The construction catalogue a firm works with: the built-in entries and its own lab data. */
 export function createCatalogueService(dataSource: DataSource) {
   const repo = dataSource.getRepository(FirmConstruction);
+  // Per process, keyed by the firm's constructions_version: another process's change bumps the
+  // version in PostgreSQL, so the next read here sees a new number and loads the rows again.
+  const memo = new Map<string, { version: number; value: FirmCatalogue }>();
 
   async function firmConstructions(organizationId: string): Promise<Construction[]> {
     const rows = await repo.find({ where: { organizationId }, order: { constructionId: "ASC" } });
     return rows.map((r) => r.data as unknown as Construction);
   }
 
-  /** The firm's catalogue for the builder, and a digest of its own entries (part of analysis cache keys). */
-  async function catalogueFor(organizationId: string): Promise<{ catalogue: Catalogue; extra: Construction[]; digest: string }> {
-    const extra = await firmConstructions(organizationId);
+  /** The firm's catalogue, from memory while its constructions_version is unchanged (do not mutate). */
+  async function catalogueFor(organizationId: string): Promise<FirmCatalogue> {
+    const current: { version: number }[] = await dataSource.query("SELECT constructions_version AS version FROM organizations WHERE id = $1", [organizationId]);
+    const hit = memo.get(organizationId);
+    if (hit && current[0] && hit.version === current[0].version) {
+      memo.delete(organizationId);
+      memo.set(organizationId, hit);
+      return hit.value;
+    }
+    // The version and the rows in one statement, so both come from one snapshot even while
+    // another process adds a construction.
+    const rows: { version: number; data: Construction | null }[] = await dataSource.query(
+      `SELECT o.constructions_version AS version, fc.data FROM organizations o
+       LEFT JOIN firm_constructions fc ON fc.organization_id = o.id WHERE o.id = $1 ORDER BY fc.construction_id`,
+      [organizationId],
+    );
+    const extra = rows.flatMap((r) => (r.data ? [r.data] : []));
     const digest = createHash("sha256").update(JSON.stringify(extra)).digest("hex").slice(0, 16);
-    return { catalogue: catalogueWith(constructionCatalogue, { constructions: extra }), extra, digest };
+    const value: FirmCatalogue = { catalogue: catalogueWith(constructionCatalogue, { constructions: extra }), extra, digest };
+    if (rows[0]) {
+      memo.delete(organizationId);
+      memo.set(organizationId, { version: rows[0].version, value });
+      if (memo.size > MEMO_FIRMS) memo.delete(memo.keys().next().value!);
+    }
+    return value;
   }
 
   async function list(actor: Actor): Promise<CatalogueResponse> {
@@ -63,7 +99,10 @@ export function createCatalogueService(dataSource: DataSource) {
     const taken = () => conflict("id_taken", `Your firm already has a construction "${input.id}"; choose another id or delete that one first.`);
     if (await repo.exists({ where: { organizationId: actor.organizationId, constructionId: input.id } })) throw taken();
     try {
-      await repo.insert({ organizationId: actor.organizationId, constructionId: input.id, data: value as never, createdById: actor.userId });
+      await dataSource.transaction(async (m) => {
+        await m.getRepository(FirmConstruction).insert({ organizationId: actor.organizationId, constructionId: input.id, data: value as never, createdById: actor.userId });
+        await m.query(BUMP_VERSION, [actor.organizationId]);
+      });
     } catch (error) {
       // Two saves of the same id at once: the primary key decides, the loser hears why.
       if ((error as { driverError?: { code?: string } }).driverError?.code === "23505") throw taken();
@@ -74,8 +113,12 @@ export function createCatalogueService(dataSource: DataSource) {
   }
 
   async function remove(actor: Actor, constructionId: string): Promise<void> {
-    const result = await repo.delete({ organizationId: actor.organizationId, constructionId });
-    if (!result.affected) throw notFound("That construction");
+    const affected = await dataSource.transaction(async (m) => {
+      const result = await m.getRepository(FirmConstruction).delete({ organizationId: actor.organizationId, constructionId });
+      if (result.affected) await m.query(BUMP_VERSION, [actor.organizationId]);
+      return result.affected ?? 0;
+    });
+    if (!affected) throw notFound("That construction");
     await recordAudit(dataSource, { organizationId: actor.organizationId, actorUserId: actor.userId, action: "construction.removed", entityType: "construction", entityId: constructionId });
   }
 

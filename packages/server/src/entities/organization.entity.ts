@@ -9,6 +9,10 @@ export class Organization {
   @Column({ type: "varchar", length: 120 })
   name!: string;
 
+  /** Bumped with every change to the firm's own constructions, so each server process knows when its copy of them is stale. */
+  @Column({ type: "integer", name: "constructions_version", default: 0 })
+  constructionsVersion!: number;
+
   @CreateDateColumn({ type: "timestamptz", name: "created_at" })
   createdAt!: Date;
 
