@@ -58,7 +58,7 @@ export function UnderlayPicker({ ui, plan, store, viewport }: { ui: UnderlayUi; 
       window.removeEventListener("keydown", key);
     };
     // A new step (kind or underlay) sets the listeners up again; added points do not.
-  }, [pick?.kind, pick?.underlayId, ui]); // eslint-disable-line react-hooks/exhaustive-deps
+  }, [pick?.kind, pick?.underlayId, ui]);
 
   // Squaring and moving finish on the second click; scaling waits for the typed distance.
   useEffect(() => {
