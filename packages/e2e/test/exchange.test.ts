@@ -20,6 +20,37 @@ function twoRoomDxf(): string {
     + g([[0, "ENDSEC"], [0, "EOF"]]);
 }
 
+/**
+ * An invented model in IFC4 text, millimetres: one storey, a 4 × 3 m space at the inner faces of
+ * four 200 mm walls (a block-and-plaster layer set) on centrelines round −100..4100 × −100..3100,
+ * and a 900 × 2100 door in the south wall placed by position alone.
+ */
+function oneRoomIfc(): string {
+  const l: string[] = [];
+  let n = 10;
+  const add = (s: string) => { l.push(`#${++n}=${s};`); return `#${n}`; };
+  const pt = (...c: number[]) => add(`IFCCARTESIANPOINT((${c.map((v) => v.toFixed(1)).join(",")}))`);
+  const z = add("IFCDIRECTION((0.,0.,1.))");
+  const o = add(`IFCAXIS2PLACEMENT3D(${pt(0, 0, 0)},$,$)`);
+  const ctx = add(`IFCGEOMETRICREPRESENTATIONCONTEXT($,'Model',3,1.E-05,${o},$)`);
+  const units = add(`IFCUNITASSIGNMENT((${add("IFCSIUNIT(*,.LENGTHUNIT.,.MILLI.,.METRE.)")}))`);
+  const project = add(`IFCPROJECT('project0000000000000000',$,'P',$,$,$,$,(${ctx}),${units})`);
+  const place = (x: number, y: number, dx?: [number, number]) => add(`IFCLOCALPLACEMENT($,${add(`IFCAXIS2PLACEMENT3D(${pt(x, y, 0)},${dx ? `${z},${add(`IFCDIRECTION((${dx[0]}.,${dx[1]}.,0.))`)}` : "$,$"})`)})`);
+  const shape = (profile: string, h: number) => add(`IFCPRODUCTDEFINITIONSHAPE($,$,(${add(`IFCSHAPEREPRESENTATION(${ctx},'Body','SweptSolid',(${add(`IFCEXTRUDEDAREASOLID(${profile},${o},${z},${h.toFixed(1)})`)}))`)}))`);
+  const rect = (cx: number, cy: number, dx: number, dy: number) => add(`IFCRECTANGLEPROFILEDEF(.AREA.,$,${add(`IFCAXIS2PLACEMENT2D(${pt(cx, cy)},$)`)},${dx.toFixed(1)},${dy.toFixed(1)})`);
+  const storey = add(`IFCBUILDINGSTOREY('storey00000000000000000',$,'Level 1',$,$,${place(0, 0)},$,$,.ELEMENT.,0.)`);
+  add(`IFCRELAGGREGATES('agg0000000000000000000',$,$,$,${project},(${storey}))`);
+  const space = add(`IFCSPACE('space00000000000000000',$,'R1',$,$,${place(0, 0)},${shape(rect(2000, 1500, 4000, 3000), 2600)},'Drum room',.ELEMENT.,.INTERNAL.,$)`);
+  add(`IFCRELAGGREGATES('agg1000000000000000000',$,$,$,${storey},(${space}))`);
+  const walls = ([[-100, -100, 1, 0, 4200], [4100, -100, 0, 1, 3200], [4100, 3100, -1, 0, 4200], [-100, 3100, 0, -1, 3200]] as const).map(([x, y, ux, uy, len], i) =>
+    add(`IFCWALL('wall${i}000000000000000000',$,'W${i}',$,$,${place(x, y, [ux, uy])},${shape(rect(len / 2, 0, len, 200), 2600)},$,.STANDARD.)`));
+  const set = add(`IFCMATERIALLAYERSET((${add(`IFCMATERIALLAYER(${add("IFCMATERIAL('Concrete block',$,$)")},190.,$,$,$,$,$)`)},${add(`IFCMATERIALLAYER(${add("IFCMATERIAL('Plaster',$,$)")},10.,$,$,$,$,$)`)}),'Block wall',$)`);
+  add(`IFCRELASSOCIATESMATERIAL('mat0000000000000000000',$,$,$,(${walls.join(",")}),${set})`);
+  const door = add(`IFCDOOR('door00000000000000000x',$,'D1',$,$,${place(1000, -100, [1, 0])},$,$,2100.,900.,.DOOR.,$,$)`);
+  add(`IFCRELCONTAINEDINSPATIALSTRUCTURE('rel0000000000000000000',$,$,$,(${[...walls, door].join(",")}),${storey})`);
+  return ["ISO-10303-21;", "HEADER;", "FILE_DESCRIPTION((''),'2;1');", "FILE_NAME('r.ifc','',(''),(''),'','','');", "FILE_SCHEMA(('IFC4'));", "ENDSEC;", "DATA;", ...l, "ENDSEC;", "END-ISO-10303-21;", ""].join("\n");
+}
+
 describe("bringing a CAD drawing into the Sketch", () => {
   let browser: Browser;
   const baseUrl = inject("baseUrl");
@@ -75,6 +106,53 @@ describe("bringing a CAD drawing into the Sketch", () => {
       if (i === 49) throw new Error("the undo was not saved");
       await page.waitForTimeout(150);
     }
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+  it("imports an IFC model in the page's worker: the bundled reader starts, the storey goes onto the plan's level, a wall type maps to a construction", async () => {
+    const { context, page, errors } = await newPage(browser);
+    await signIn(page, baseUrl, SURVEYOR);
+    const projectId = await createProject(page, baseUrl, "Exchange test — drum room model");
+    await page.goto(`${baseUrl}/projects/${projectId}/sketch`);
+    await page.getByTestId("plan-canvas").waitFor({ timeout: 20_000 });
+    const requests: string[] = [];
+    page.on("request", (r) => requests.push(r.url()));
+    const levels = Object.values((await getPlan(page, baseUrl, projectId)).document.elements as Record<string, { type: string; id: string; name: string }>).filter((e) => e.type === "level");
+    expect(levels.map((l) => l.name)).toEqual(["Ground floor"]);
+
+    await page.getByRole("button", { name: "Export" }).click();
+    await page.getByRole("button", { name: "Import IFC…" }).click();
+    const dialog = page.getByRole("dialog", { name: "Bring in a building model" });
+    await dialog.locator('input[type="file"]').setInputFiles({ name: "drum-room.ifc", mimeType: "application/x-step", buffer: Buffer.from(oneRoomIfc(), "latin1") });
+    await dialog.getByLabel("Level for Level 1").waitFor({ timeout: 30_000 });
+    await expect(dialog.textContent()).resolves.toMatch(/1 space, 4 walls, 1 door, 0 windows/);
+    await dialog.getByLabel("Level for Level 1").selectOption({ label: "onto Ground floor" });
+    await dialog.getByLabel("Construction for Block wall").selectOption("masonry-brick-100");
+    if (SHOTS) await page.screenshot({ path: `${SHOTS}/exchange-4-ifc-confirm.png` });
+    await dialog.getByRole("button", { name: "Convert" }).click();
+    const report = dialog.getByLabel("Import report");
+    await report.waitFor({ timeout: 20_000 });
+    await expect(report.textContent()).resolves.toMatch(/1 room, 4 walls, 1 door/);
+    if (SHOTS) await page.screenshot({ path: `${SHOTS}/exchange-5-ifc-report.png` });
+    await dialog.getByRole("button", { name: "Add to plan" }).click();
+    await dialog.waitFor({ state: "hidden" });
+    // The WebAssembly came from our own origin.
+    expect(requests.filter((u) => u.endsWith(".wasm")).every((u) => u.startsWith(baseUrl))).toBe(true);
+    expect(requests.some((u) => u.endsWith(".wasm"))).toBe(true);
+
+    for (let i = 0; ; i++) {
+      await waitSaved(page);
+      const els = Object.values((await getPlan(page, baseUrl, projectId)).document.elements as Record<string, { type: string; name?: string; levelId?: string; constructionId?: string; widthM?: number }>);
+      if (els.some((e) => e.type === "room")) {
+        expect(els.filter((e) => e.type === "room").map((e) => [e.name, e.levelId])).toEqual([["Drum room", levels[0]!.id]]);
+        expect(els.filter((e) => e.type === "wall").map((e) => e.constructionId)).toEqual(Array(4).fill("masonry-brick-100"));
+        expect(els.find((e) => e.type === "door")?.widthM).toBeCloseTo(0.9, 6);
+        break;
+      }
+      if (i === 50) throw new Error("the import was not saved");
+      await page.waitForTimeout(150);
+    }
+    if (SHOTS) await page.screenshot({ path: `${SHOTS}/exchange-6-ifc-added.png` });
     expect(errors).toEqual([]);
     await context.close();
   });

@@ -48,7 +48,7 @@ describe("IfcImportDialog", () => {
     render(<IfcImportDialog open onClose={() => {}} plan={plan} onCommand={onCommand} runner={inlineIfcRunner(() => ifcReader())} />);
     choose(oneRoomIfc());
     const onto = (await screen.findByLabelText("Level for Level 1", {}, { timeout: 5000 })) as HTMLSelectElement;
-    expect(screen.getByText(/1 spaces, 4 walls/)).toBeTruthy();
+    expect(screen.getByText(/1 space, 4 walls/)).toBeTruthy();
     expect(screen.getByText(/Concrete block 190.0 mm · Plaster 10.0 mm/)).toBeTruthy();
     fireEvent.change(onto, { target: { value: "level-0" } });
     fireEvent.change(screen.getByLabelText("Construction for Block wall"), { target: { value: "masonry-brick-100" } });

@@ -16,6 +16,7 @@ type Step =
   | { kind: "report"; imported: IfcImport };
 
 const NEW_LEVEL = "";
+const count = (n: number, one: string) => `${n} ${one}${n === 1 ? "" : "s"}`;
 
 /**
  * Brings a building model in: pick an IFC file, watch it read off the main thread, confirm the
@@ -100,13 +101,13 @@ export function IfcImportDialog({ open, onClose, plan, onCommand, runner: given 
       {step.kind === "confirm" ? (
         <form className="flex max-h-[60vh] flex-col gap-3 overflow-y-auto" onSubmit={(e) => { e.preventDefault(); void convert(step.survey); }}>
           <p className="text-sm">{step.survey.schema}, lengths in {step.survey.lengthUnit.name}s.</p>
-          <fieldset className="flex flex-col gap-2 text-sm">
+          <fieldset className="flex min-w-0 flex-col gap-2 text-sm">
             <legend className="font-medium">Storeys</legend>
             {step.survey.storeys.map((s) => (
               <div key={s.globalId} className="flex flex-wrap items-center gap-2">
                 <label className="flex min-h-9 items-center gap-2">
                   <input type="checkbox" checked={take[s.globalId] ?? false} onChange={(e) => setTake((t) => ({ ...t, [s.globalId]: e.target.checked }))} className="h-4 w-4 accent-brand" />
-                  {s.name} at {s.elevationM.toFixed(2)} m — {s.spaces} spaces, {s.walls} walls, {s.doors} doors, {s.windows} windows
+                  {s.name} at {s.elevationM.toFixed(2)} m — {count(s.spaces, "space")}, {count(s.walls, "wall")}, {count(s.doors, "door")}, {count(s.windows, "window")}
                 </label>
                 <select aria-label={`Level for ${s.name}`} value={onto[s.globalId] ?? NEW_LEVEL} disabled={!take[s.globalId]} onChange={(e) => setOnto((o) => ({ ...o, [s.globalId]: e.target.value }))} className="min-h-9 rounded border border-rule px-2">
                   <option value={NEW_LEVEL}>as a new level</option>
@@ -116,14 +117,14 @@ export function IfcImportDialog({ open, onClose, plan, onCommand, runner: given 
             ))}
           </fieldset>
           {step.survey.layerSets.length > 0 ? (
-            <fieldset className="flex flex-col gap-2 text-sm">
+            <fieldset className="flex min-w-0 flex-col gap-2 text-sm">
               <legend className="font-medium">Wall constructions</legend>
               <p className="text-muted">Each wall type's material layers, as the file lists them. Choose the catalogue construction that matches, so the analysis uses its sound insulation.</p>
               {step.survey.layerSets.map((set) => (
                 <div key={set.key} className="flex flex-col gap-1 rounded border border-rule p-2">
                   <span className="font-medium">{set.name} — {set.walls} {set.walls === 1 ? "wall" : "walls"}, {(set.totalThicknessM * 1000).toFixed(0)} mm</span>
                   <span className="text-muted">{set.layers.map((l) => `${l.material}${l.thicknessM > 0 ? ` ${(l.thicknessM * 1000).toFixed(1)} mm` : ""}`).join(" · ")}</span>
-                  <select aria-label={`Construction for ${set.name}`} value={constructionFor[set.key] ?? ""} onChange={(e) => setConstructionFor((c) => ({ ...c, [set.key]: e.target.value }))} className="min-h-9 rounded border border-rule px-2">
+                  <select aria-label={`Construction for ${set.name}`} value={constructionFor[set.key] ?? ""} onChange={(e) => setConstructionFor((c) => ({ ...c, [set.key]: e.target.value }))} className="min-h-9 w-full min-w-0 rounded border border-rule px-2">
                     <option value="">Plan default ({defaultWall?.name ?? plan.defaults.interiorWallConstructionId})</option>
                     {walls.map((w) => <option key={w.id} value={w.id}>{w.name}</option>)}
                   </select>

@@ -1,3 +1,4 @@
+import { constructionCatalogue } from "@hushmark/floorplan";
 import type { IfcImportReport } from "@hushmark/floorplan/ifc";
 
 const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
@@ -45,7 +46,7 @@ export function IfcReportView({ report }: { report: IfcImportReport }) {
       {report.rooms.some((r) => r.edgesMoved > 0) ? <p className="text-muted">The file's spaces stop at the wall faces; on the plan, room edges run along the wall centrelines, so the areas are larger.</p> : null}
       {bySet.size > 0 ? (
         <ul className="list-disc pl-5">
-          {[...bySet].map(([key, s]) => <li key={key}>{plural(s.walls, "wall")} of {key}: {s.constructionId}</li>)}
+          {[...bySet].map(([key, s]) => <li key={key}>{plural(s.walls, "wall")} of {key}: {constructionCatalogue.constructions[s.constructionId]?.name ?? s.constructionId}</li>)}
         </ul>
       ) : null}
       {report.skipped.length > 0 ? (

@@ -6,7 +6,8 @@ import { ifcSteps, type IfcWorkerReply, type IfcWorkerRequest } from "./ifc-runn
 
 const reply = (message: IfcWorkerReply) => (self as unknown as DedicatedWorkerGlobalScope).postMessage(message);
 let api: ReturnType<typeof ifcReader> | null = null;
-const steps = ifcSteps(() => (api ??= ifcReader(() => new URL(wasmUrl, self.location.href).href)));
+// A reader that failed to start is dropped, so the next file tries again.
+const steps = ifcSteps(() => (api ??= ifcReader(() => new URL(wasmUrl, self.location.href).href).catch((e: unknown) => { api = null; throw e; })));
 
 self.onmessage = async (event: MessageEvent<IfcWorkerRequest>) => {
   const request = event.data;
