@@ -16,6 +16,35 @@ export const IFC_IMPORT_DEFAULTS = {
   window: { constructionId: DXF_IMPORT_DEFAULTS.window.constructionId },
 } as const;
 
+/** Walls bucketed on a square grid (m) by their bounding boxes, so nearby walls are found without a scan of all. */
+function wallGrid(walls: readonly IfcWallRead[], cellM = 2) {
+  const cells = new Map<string, IfcWallRead[]>();
+  const order = new Map(walls.map((w, i) => [w, i]));
+  const range = (a: number, b: number) => [Math.floor(Math.min(a, b) / cellM), Math.floor(Math.max(a, b) / cellM)] as const;
+  const visit = (x0: number, y0: number, x1: number, y1: number, fn: (key: string) => void) => {
+    const [i0, i1] = range(x0, x1), [j0, j1] = range(y0, y1);
+    for (let i = i0; i <= i1; i++) for (let j = j0; j <= j1; j++) fn(`${i},${j}`);
+  };
+  for (const w of walls) {
+    const pad = w.thicknessM;
+    visit(Math.min(w.start.x, w.end.x) - pad, Math.min(w.start.y, w.end.y) - pad, Math.max(w.start.x, w.end.x) + pad, Math.max(w.start.y, w.end.y) + pad, (k) => {
+      const list = cells.get(k);
+      if (list) list.push(w);
+      else cells.set(k, [w]);
+    });
+  }
+  /** Walls whose boxes may come within `padM` of the box (m), each once, in reading order. */
+  return (box: { minX: number; minY: number; maxX: number; maxY: number }, padM: number): IfcWallRead[] => {
+    const found = new Set<IfcWallRead>();
+    visit(box.minX - padM, box.minY - padM, box.maxX + padM, box.maxY + padM, (k) => { for (const w of cells.get(k) ?? []) found.add(w); });
+    return [...found].sort((a, b) => order.get(a)! - order.get(b)!);
+  };
+}
+
+const boxOf = (pts: ReadonlyArray<{ x: number; y: number }>) => ({
+  minX: Math.min(...pts.map((p) => p.x)), minY: Math.min(...pts.map((p) => p.y)), maxX: Math.max(...pts.map((p) => p.x)), maxY: Math.max(...pts.map((p) => p.y)),
+});
+
 /** Storeys with what is on them and the distinct wall layer sets, for the surveyor to confirm and map. */
 export function ifcSurvey(model: IfcModelRead): IfcSurvey {
   const sets = new Map<string, IfcSurvey["layerSets"][number]>();
@@ -29,6 +58,8 @@ export function ifcSurvey(model: IfcModelRead): IfcSurvey {
     if (s) s.walls++;
     else sets.set(w.layerSet.key, { ...w.layerSet, walls: 1 });
   }
+  const wallStorey = new Map(model.walls.map((w) => [w.globalId, w.storeyId]));
+  const hostStorey = (o: IfcModelRead["openings"][number]) => (o.hostWallId ? wallStorey.get(o.hostWallId) : undefined) ?? o.storeyId;
   return {
     schema: model.schema,
     lengthUnit: model.lengthUnit,
@@ -36,26 +67,22 @@ export function ifcSurvey(model: IfcModelRead): IfcSurvey {
       ...s,
       spaces: model.spaces.filter((x) => x.storeyId === s.globalId).length,
       walls: model.walls.filter((x) => x.storeyId === s.globalId).length,
-      doors: model.openings.filter((x) => x.kind === "door" && hostStorey(model, x) === s.globalId).length,
-      windows: model.openings.filter((x) => x.kind === "window" && hostStorey(model, x) === s.globalId).length,
+      doors: model.openings.filter((x) => x.kind === "door" && hostStorey(x) === s.globalId).length,
+      windows: model.openings.filter((x) => x.kind === "window" && hostStorey(x) === s.globalId).length,
     })),
     layerSets: [...sets.values()].sort((a, b) => b.walls - a.walls || (a.key < b.key ? -1 : 1)),
     wallsWithoutLayers,
   };
 }
 
-function hostStorey(model: IfcModelRead, o: IfcModelRead["openings"][number]): string | null {
-  return model.walls.find((w) => w.globalId === o.hostWallId)?.storeyId ?? o.storeyId;
-}
-
 /** The wall an opening fills (the file's relation), else the nearest on its storey within tolerance whose span holds its centre. */
-function hostOf(model: IfcModelRead, o: IfcModelRead["openings"][number], tolM: number): IfcWallRead | undefined {
+function hostOf(byId: ReadonlyMap<string, IfcWallRead>, near: ReturnType<typeof wallGrid>, o: IfcModelRead["openings"][number], tolM: number): IfcWallRead | undefined {
   if (o.hostWallId) {
-    const w = model.walls.find((x) => x.globalId === o.hostWallId);
+    const w = byId.get(o.hostWallId);
     if (w) return w;
   }
   let best: { w: IfcWallRead; d: number } | undefined;
-  for (const w of model.walls) {
+  for (const w of near({ minX: o.centre.x, minY: o.centre.y, maxX: o.centre.x, maxY: o.centre.y }, tolM)) {
     if (o.storeyId && w.storeyId !== o.storeyId) continue;
     const len = Math.hypot(w.end.x - w.start.x, w.end.y - w.start.y);
     const ux = (w.end.x - w.start.x) / len, uy = (w.end.y - w.start.y) / len;
@@ -77,6 +104,7 @@ export function convertIfc(model: IfcModelRead, options: IfcImportOptions = {}):
   const skipped = new ReportLines();
   for (const line of model.skipped) skipped.add(line.reason, line.types[0] ?? "IfcProduct", line.handles, line.count);
   const byType = structuredCloneCounts(model.byType);
+  const storeyById = new Map(model.storeys.map((s) => [s.globalId, s]));
   const chosen = new Set(options.storeys ?? model.storeys.map((s) => s.globalId));
   const levelOf = new Map<string, string>();
   const levels: Level[] = [];
@@ -110,13 +138,15 @@ export function convertIfc(model: IfcModelRead, options: IfcImportOptions = {}):
     keptWalls.push(w);
   }
 
+  const nearKept = new Map<string, ReturnType<typeof wallGrid>>();
+  for (const storeyId of new Set(keptWalls.map((w) => w.storeyId))) nearKept.set(storeyId, wallGrid(keptWalls.filter((w) => w.storeyId === storeyId)));
   const rooms: Room[] = [];
   const reportRooms: IfcImportReport["rooms"] = [];
   let roomNames = 0;
   for (const s of model.spaces) {
     const levelId = levelOf.get(s.storeyId);
     if (!levelId) { notChosen("IfcSpace", s.globalId); continue; }
-    const onStorey = keptWalls.filter((w) => w.storeyId === s.storeyId);
+    const onStorey = nearKept.get(s.storeyId)?.(boxOf(s.footprint), 1) ?? [];
     const snapped = o.roomOutlines === "wall-centre" ? outlineOnWallAxes(s.footprint, onStorey) : { points: s.footprint, moved: 0 };
     const id = `${o.idPrefix}-room-${safeId(s.globalId)}`;
     const name = s.longName || s.name || "Room";
@@ -126,9 +156,11 @@ export function convertIfc(model: IfcModelRead, options: IfcImportOptions = {}):
   }
 
   const openings: Array<Door | Window> = [];
+  const wallById = new Map(model.walls.map((w) => [w.globalId, w]));
+  const nearAll = wallGrid(model.walls);
   for (const op of model.openings) {
     const typeName = op.ifcType;
-    const host = hostOf(model, op, o.hostToleranceM);
+    const host = hostOf(wallById, nearAll, op, o.hostToleranceM);
     const wallId = host ? wallIdOf.get(host.globalId) : undefined;
     if (!host) {
       skipped.add(`a ${op.kind} is in no wall that was read`, typeName, [op.globalId]);
@@ -141,7 +173,7 @@ export function convertIfc(model: IfcModelRead, options: IfcImportOptions = {}):
     const along = ((op.centre.x - host.start.x) * (host.end.x - host.start.x) + (op.centre.y - host.start.y) * (host.end.y - host.start.y)) / len;
     const widthM = Math.min(op.widthM, len);
     const offsetM = Math.max(0, Math.min(len - widthM, along - widthM / 2));
-    const storey = model.storeys.find((s) => s.globalId === host.storeyId);
+    const storey = storeyById.get(host.storeyId);
     const base = { id: `${o.idPrefix}-${op.kind}-${safeId(op.globalId)}`, ...(op.name ? { name: op.name } : {}), wallRef: wallId, offsetM, widthM, heightM: op.heightM };
     openings.push(op.kind === "door"
       ? { type: "door", ...base, constructionId: o.door.constructionId }
