@@ -30,12 +30,15 @@ describe("CollisionGrid", () => {
 describe("fitName", () => {
   it("keeps a name that fits and shortens one that does not", () => {
     expect(fitName("Bedroom", 100, mono)).toBe("Bedroom");
-    const short = fitName("Living room and kitchen", 100, mono);
+    const short = fitName("Living room and kitchen", 140, mono);
     expect(short?.endsWith("…")).toBe(true);
-    expect(mono(short!)).toBeLessThanOrEqual(92);
+    expect(mono(short!)).toBeLessThanOrEqual(132);
   });
 
-  it("gives up below three letters", () => {
+  it("gives up rather than keep less than most of the name", () => {
     expect(fitName("Bathroom", 30, mono)).toBeNull();
+    // "Room 0.7.2" shortened to fit 40 px would be "Room…"-ish: hidden instead.
+    expect(fitName("Room 0.7.2", 48, mono)).toBeNull();
+    expect(fitName("Room 0.7.2", 63, mono)).toBe("Room 0…");
   });
 });

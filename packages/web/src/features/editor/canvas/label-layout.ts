@@ -44,12 +44,14 @@ export const AREA_ROOM_H_PX = 44;
 
 /**
  * A room name that fits inside the room's width on screen: whole, or shortened with an ellipsis
- * to no fewer than three letters; null when even that does not fit. `measure` answers px.
+ * while it keeps most of the name (at least five letters and 60 % of it — "Roo…" tells nothing);
+ * null when even that does not fit. `measure` answers px.
  */
 export function fitName(name: string, roomWidthPx: number, measure: (text: string) => number): string | null {
   const room = roomWidthPx - 8;
   if (measure(name) <= room) return name;
-  for (let n = Math.min(name.length - 1, 30); n >= 3; n--) {
+  const least = Math.max(5, Math.ceil(name.length * 0.6));
+  for (let n = Math.min(name.length - 1, 30); n >= least; n--) {
     const short = `${name.slice(0, n).trimEnd()}…`;
     if (measure(short) <= room) return short;
   }

@@ -152,11 +152,11 @@ export function paintLabels(ctx: CanvasRenderingContext2D, spec: PaintLabels): v
     const showArea = area !== null && areaW <= wPx - 8;
     const nameW = textWidth(ctx, NAME_FONT, name);
     const h = showArea ? 32 : 16;
-    // At the centre, or half a line lower when a pin's label sits there.
+    // At the centre, or moved up or down inside the room when a pin's label or a note sits there.
     let placed: LabelBox | null = null;
-    for (const dy of [0, 14]) {
+    for (const dy of [0, 20, -20, 40, -40]) {
       const box = { x: x - Math.max(nameW, areaW) / 2, y: y - h / 2 + dy, w: Math.max(nameW, showArea ? areaW : 0), h };
-      if (box.y + box.h - y > hPx / 2) break;
+      if (Math.abs(dy) + h / 2 > hPx / 2 - 4) continue;
       if (grid.place(box)) { placed = box; break; }
     }
     if (!placed) continue;

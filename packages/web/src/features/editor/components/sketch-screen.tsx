@@ -11,6 +11,7 @@ import { editorKeyHandler } from "../hooks/use-editor-keys";
 import { useConflict } from "../hooks/use-conflict";
 import { useProblems } from "../hooks/use-problems";
 import { usePinReadings } from "../hooks/use-pin-readings";
+import { NARROW, useMediaQuery } from "../hooks/use-media-query";
 import { ToolRail } from "./tool-rail";
 import { StatusLine } from "./status-line";
 import { DetailsPanel } from "../panels/details-panel";
@@ -38,6 +39,7 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
   const underlayUi = useUnderlayUi();
   const underlaySrc = useUnderlaySrc(projectId);
   const pins = usePinReadings(projectId, plan);
+  const narrow = useMediaQuery(NARROW);
   const [toolId, setToolId] = useState<ToolId>("select");
   const [levelId, setLevelId] = useState(() => levelsByElevation(store.plan).find((l) => l.elevationM >= 0)?.id ?? levelsByElevation(store.plan)[0]?.id ?? "ground");
   const [side, setSide] = useState<SideTab>("details");
@@ -95,19 +97,19 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
         <span className="mx-1 h-6 w-px bg-rule" aria-hidden="true" />
         {!readOnly ? (
           <>
-            <button type="button" className="min-h-9 rounded-md px-2 text-[14px] hover:bg-ink/5 disabled:opacity-40" disabled={!history.undo} onClick={() => store.undo()} aria-keyshortcuts="Control+Z" title={history.undo ? `Undo ${history.undo}` : "Nothing to undo"}>Undo</button>
-            <button type="button" className="min-h-9 rounded-md px-2 text-[14px] hover:bg-ink/5 disabled:opacity-40" disabled={!history.redo} onClick={() => store.redo()} aria-keyshortcuts="Control+Shift+Z" title={history.redo ? `Redo ${history.redo}` : "Nothing to redo"}>Redo</button>
+            <button type="button" className="min-h-10 rounded-md px-2 text-[14px] hover:bg-ink/5 disabled:opacity-40" disabled={!history.undo} onClick={() => store.undo()} aria-keyshortcuts="Control+Z" title={history.undo ? `Undo ${history.undo}` : "Nothing to undo"}>Undo</button>
+            <button type="button" className="min-h-10 rounded-md px-2 text-[14px] hover:bg-ink/5 disabled:opacity-40" disabled={!history.redo} onClick={() => store.redo()} aria-keyshortcuts="Control+Shift+Z" title={history.redo ? `Redo ${history.redo}` : "Nothing to redo"}>Redo</button>
           </>
         ) : null}
-        <button type="button" className="min-h-9 rounded-md px-2 text-[14px] hover:bg-ink/5" onClick={fit}>Fit to plan</button>
+        <button type="button" className="min-h-10 rounded-md px-2 text-[14px] hover:bg-ink/5" onClick={fit}>Fit to plan</button>
         {!readOnly ? <UnderlayMenu projectId={projectId} plan={plan} levelId={levelId} store={store} ui={underlayUi} view={{ ...viewport, width: canvas.width, height: canvas.height }} /> : null}
         <div className="ml-auto"><ExportMenu plan={plan} levelId={levelId} title={title} projectId={projectId} onCommand={readOnly ? undefined : (c) => store.run(c)} /></div>
       </div>
       {session.loadProblem ? <p role="alert" className="bg-danger/10 px-3 py-2 text-sm text-danger">The stored plan could not be read ({session.loadProblem}); a blank plan is open. Nothing is saved until you draw.</p> : null}
       {session.restoredPending ? <p className="bg-caution/10 px-3 py-1.5 text-sm">Edits made on this device earlier and not yet saved were put back; they are being saved now.</p> : null}
       <div className="flex min-h-0 flex-1 flex-col lg:flex-row">
-        <div className="flex min-h-0 flex-1">
-          {!readOnly ? <ToolRail active={toolId} onPick={setToolId} /> : null}
+        <div className={`flex min-h-0 flex-1 ${narrow ? "flex-col" : ""}`}>
+          {!readOnly ? <ToolRail active={toolId} onPick={setToolId} orientation={narrow ? "horizontal" : "vertical"} /> : null}
           <div className="flex min-h-0 min-w-0 flex-1 flex-col">
             <div ref={canvas.ref} className="relative min-h-0 flex-1" onPointerDownCapture={() => { fitted.current = true; }}>
               {viewReady ? <PlanCanvas
@@ -134,7 +136,7 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
             <StatusLine status={readOnly ? null : status} unit={plan.displayUnit} onUnit={readOnly ? undefined : (u) => store.run(setPlanUnit(u))} scale={viewport.scale} problems={counts} onProblems={() => setSide("problems")} hint={hint} onConflict={() => setConflictOpen(true)} />
           </div>
         </div>
-        <aside aria-label="Selection and lists" className="flex h-[40%] min-h-0 shrink-0 flex-col border-t border-rule lg:h-auto lg:w-[340px] lg:border-l lg:border-t-0">
+        <aside aria-label="Selection and lists" className="flex h-[36%] min-h-0 shrink-0 flex-col border-t border-rule sm:h-[40%] lg:h-auto lg:w-[340px] lg:border-l lg:border-t-0">
           <div role="tablist" aria-label="Side panel" className="flex border-b border-rule">
             {(["details", "elements", "problems"] as const).map((t) => (
               <button key={t} role="tab" type="button" aria-selected={side === t} onClick={() => setSide(t)} className={`min-h-11 flex-1 border-b-[3px] text-[14px] font-medium ${side === t ? "border-brand text-brand-strong" : "border-transparent text-muted hover:text-ink"}`}>

@@ -28,7 +28,7 @@ export function StatusLine({ status, unit, onUnit, scale, problems, onProblems, 
 }) {
   const s = status ? saveStatusText(status) : null;
   return (
-    <div className="flex min-h-9 flex-wrap items-center gap-x-4 gap-y-1 border-t border-rule bg-panel px-3 py-1 text-[13px]">
+    <div className="flex h-10 shrink-0 flex-nowrap items-center gap-x-3 overflow-x-auto whitespace-nowrap border-t border-rule bg-panel px-3 text-[13px] sm:gap-x-4">
       {s ? (
         <span role="status" aria-live="polite" data-testid="save-state" data-state={status?.kind} className={`inline-flex items-center gap-1.5 font-medium ${toneClass[s.tone]}`}>
           <span aria-hidden="true" className={`h-2 w-2 rounded-full ${dotClass[s.tone]}`} />
@@ -38,7 +38,7 @@ export function StatusLine({ status, unit, onUnit, scale, problems, onProblems, 
       {status?.kind === "conflict" && onConflict ? <button type="button" onClick={onConflict} className="min-h-9 rounded px-2 font-medium text-danger underline">Choose a version</button> : null}
       {onUnit ? (
         <label className="inline-flex items-center gap-1 text-muted">
-          Units
+          <span className="sr-only sm:not-sr-only">Units</span>
           <select value={unit} onChange={(e) => onUnit(e.target.value as "metric" | "imperial")} className="rounded border border-rule bg-panel px-1 py-0.5 text-ink">
             <option value="metric">metres</option>
             <option value="imperial">feet and inches</option>
@@ -47,8 +47,8 @@ export function StatusLine({ status, unit, onUnit, scale, problems, onProblems, 
       ) : (
         <span className="text-muted">{unit === "metric" ? "metres" : "feet and inches"}</span>
       )}
-      <span className="numeric text-muted" aria-label="Zoom">{Math.round(scale)} px/m</span>
-      <button type="button" onClick={onProblems} className={`numeric rounded px-1 font-medium ${problems.errors ? "text-danger" : problems.warnings ? "text-caution" : "text-good"}`}>
+      <span className="numeric hidden text-muted sm:inline" aria-label="Zoom">{Math.round(scale)} px/m</span>
+      <button type="button" onClick={onProblems} className={`numeric min-h-9 rounded px-1 font-medium ${problems.errors ? "text-danger" : problems.warnings ? "text-caution" : "text-good"}`}>
         {problems.errors || problems.warnings ? `${problems.errors} problem${problems.errors === 1 ? "" : "s"}, ${problems.warnings} note${problems.warnings === 1 ? "" : "s"}` : "No problems"}
       </button>
       {hint ? <span className="min-w-0 flex-1 truncate text-right text-muted">{hint}</span> : null}

@@ -23,6 +23,8 @@ describe("viewport", () => {
     expect(v.scale).toBe(45);
     const centre = toScreen(v, 10, 5);
     expect(centre).toEqual({ x: 500, y: 300 });
+    // On a phone-sized canvas the margin shrinks to a tenth of the short side.
+    expect(fitBounds({ minX: 0, minY: 0, maxX: 20, maxY: 10 }, 360, 160, 48).scale).toBeCloseTo(12.8); // (160 − 2 × 16) / 10 m, against 6.4 with the full margin
     const empty = fitBounds(null, 800, 600);
     expect(toScreen(empty, 4, 3).x).toBeCloseTo(400);
   });

@@ -32,6 +32,8 @@ export function fitBounds(bounds: Bounds | null, width: number, height: number, 
   if (width <= 0 || height <= 0) return { scale: 50, ox: 0, oy: 0 };
   // An empty plan shows a room-sized area (8 × 6 m from the origin) to start drawing in.
   if (!bounds) return fitBounds({ minX: 0, minY: 0, maxX: 8, maxY: 6 }, width, height, margin);
+  // A small canvas (a phone, a short bottom sheet) keeps a thinner margin, so the plan is not lost in it.
+  margin = Math.min(margin, Math.max(12, Math.min(width, height) * 0.1));
   const w = Math.max(bounds.maxX - bounds.minX, 1);
   const h = Math.max(bounds.maxY - bounds.minY, 1);
   const scale = Math.min(MAX_SCALE, Math.max(MIN_SCALE, Math.min((width - 2 * margin) / w, (height - 2 * margin) / h)));

@@ -142,12 +142,12 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
               overlay={result ? <ShareOverlay plan={plan} levelId={levelId} elements={result.elements} scale={viewport.scale} dimmed={stale} /> : null}
               overlayLabels={result ? (drawnView) => <PathLines result={result} levelId={levelId} v={drawnView} dimmed={stale} highlight={highlight} /> : undefined}
             />
-            <div className="pointer-events-none absolute bottom-2 left-2 right-2 flex flex-wrap items-center gap-x-3 gap-y-1 rounded-md border border-rule bg-panel/95 px-2 py-1 text-[12px] shadow-sm" aria-label="Colour legend">
-              <p className="font-semibold">{plain ? "Share of what you hear" : "Share of the sound reaching the room"}</p>
-              <ul className="flex flex-wrap gap-x-3 gap-y-0.5">
-                {SHARE_LEGEND.map((l) => <li key={l.label} className="flex items-center gap-1.5"><span className="inline-block h-3 w-4 rounded-sm border border-rule" style={{ background: l.colour }} aria-hidden="true" />{l.label}</li>)}
-              </ul>
-            </div>
+          </div>
+          <div className="flex shrink-0 flex-wrap items-center gap-x-3 gap-y-1 border-t border-rule bg-panel px-2 py-1 text-[12px]" aria-label="Colour legend">
+            <p className="font-semibold">{plain ? "Share of what you hear" : "Share of the sound reaching the room"}</p>
+            <ul className="flex flex-wrap gap-x-3 gap-y-0.5">
+              {SHARE_LEGEND.map((l) => <li key={l.label} className="flex items-center gap-1.5"><span className="inline-block h-3 w-4 rounded-sm border border-rule" style={{ background: l.colour }} aria-hidden="true" />{l.label}</li>)}
+            </ul>
           </div>
         </div>
         <aside aria-label="Results" className="flex h-[40%] min-h-0 shrink-0 flex-col gap-4 overflow-y-auto border-t border-rule p-3 lg:h-auto lg:w-[360px] lg:border-l lg:border-t-0">
