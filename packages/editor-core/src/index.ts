@@ -44,6 +44,6 @@ export { InspectTool } from "./tools/inspect/inspect-tool.js";
 
 export { Autosave } from "./save/autosave.js";
 export type { AutosaveOptions } from "./save/autosave.js";
-export { storagePendingStore, memoryStorage } from "./save/pending-store.js";
+export { storagePendingStore, memoryStorage, pendingAlreadyStored } from "./save/pending-store.js";
 export type { KeyValueStorage } from "./save/pending-store.js";
 export type { Clock, PendingSave, PendingStore, SaveOutcome, SaveStatus, SaveTransport } from "./save/types.js";

@@ -35,6 +35,27 @@ export function storagePendingStore(storage: KeyValueStorage, projectId: string)
   };
 }
 
+/** JSON with every object's keys sorted: the server's jsonb keeps its own key order, so plain text comparison would differ. */
+function canonicalJson(value: unknown): string {
+  if (value === null || typeof value !== "object") return JSON.stringify(value) ?? "null";
+  if (Array.isArray(value)) return `[${value.map(canonicalJson).join(",")}]`;
+  const o = value as Record<string, unknown>;
+  return `{${Object.keys(o)
+    .filter((k) => o[k] !== undefined)
+    .sort()
+    .map((k) => `${JSON.stringify(k)}:${canonicalJson(o[k])}`)
+    .join(",")}}`;
+}
+
+/**
+ * True when the server already holds the pending edit: its save went through but the answer never
+ * came back (the connection dropped, the page was unloading). Putting it back would only conflict
+ * with itself, so the caller drops it instead.
+ */
+export function pendingAlreadyStored(pending: PendingSave, server: { version: number; document: unknown }): boolean {
+  return server.version > pending.baseVersion && canonicalJson(server.document) === canonicalJson(pending.document);
+}
+
 export function memoryStorage(): KeyValueStorage & { map: Map<string, string> } {
   const map = new Map<string, string>();
   return {

@@ -1,7 +1,7 @@
 import { useEffect, useState, useSyncExternalStore } from "react";
 import { useQueryClient, type QueryClient } from "@tanstack/react-query";
 import { projectKeys } from "../../projects/api/keys";
-import { Autosave, EditorStore, storagePendingStore, type SaveStatus } from "@hushmark/editor-core";
+import { Autosave, EditorStore, pendingAlreadyStored, storagePendingStore, type SaveStatus } from "@hushmark/editor-core";
 import { parsePlan } from "@hushmark/floorplan";
 import type { PlanResponse } from "@hushmark/schemas";
 import { planTransport } from "../api/save-plan";
@@ -30,7 +30,12 @@ function createSession(projectId: string, response: PlanResponse, title: string,
   const pending = storagePendingStore(window.localStorage, projectId);
   let baseVersion = response.version;
   let restoredPending = false;
-  const kept = readOnly ? null : pending.read();
+  let kept = readOnly ? null : pending.read();
+  if (kept && pendingAlreadyStored(kept, response)) {
+    // Its save reached the server but the answer was lost (say, sent as the page unloaded).
+    pending.clear();
+    kept = null;
+  }
   if (kept) {
     const parsed = parsePlan(kept.document);
     if (parsed.ok) {
