@@ -59,6 +59,8 @@ export class PerturbationEvaluator {
   private readonly isTouched: Uint8Array;
   private readonly queue: Int32Array;
   private readonly inQueue: Uint8Array;
+  /** Scratch: the bands one push relaxes. */
+  private readonly bands: Int32Array;
   private touchedCount = 0;
 
   constructor(
@@ -71,6 +73,7 @@ export class PerturbationEvaluator {
     this.isTouched = new Uint8Array(n);
     this.queue = new Int32Array(n + 1);
     this.inQueue = new Uint8Array(n);
+    this.bands = new Int32Array(B);
   }
 
   /** Receiver energy per band after the perturbation. */
@@ -143,19 +146,38 @@ export class PerturbationEvaluator {
     return false;
   }
 
-  private pushNode(j: number, xr: Float64Array, d: Float64Array): void {
-    const { c, ex, receiver } = this.base;
+  /**
+   * Relaxes node j in the bands where its residual still matters (z·|r| above that band's
+   * threshold) and hands it on to the neighbours in those bands only; the other bands keep their
+   * small residual, which the error bound counts. Each band is its own system, so late pushes
+   * that only the slow low bands still need do not pay for every band.
+   */
+  private pushNode(j: number, xr: Float64Array, d: Float64Array, theta: Float64Array): void {
+    const { c, ex, receiver, z } = this.base;
     const B = c.B;
+    const res = this.res;
+    const bands = this.bands;
+    let nb = 0;
     for (let b = 0; b < B; b++) {
-      d[b] = this.res[j * B + b]! / c.absorption[j * B + b]!;
-      this.res[j * B + b] = 0;
+      const r = res[j * B + b]!;
+      if (z[j * B + b]! * Math.abs(r) > theta[b]!) {
+        d[b] = r / c.absorption[j * B + b]!;
+        res[j * B + b] = 0;
+        bands[nb++] = b;
+      }
     }
-    if (j === receiver) for (let b = 0; b < B; b++) xr[b]! += d[b]!;
+    if (j === receiver) for (let t = 0; t < nb; t++) xr[bands[t]!]! += d[bands[t]!]!;
+    const w = c.weight;
     for (let k = c.adjStart[j]!; k < c.adjStart[j + 1]!; k++) {
       const i = c.adjNode[k] as number;
       if (ex.fixed[i]) continue;
       const lb = c.adjLink[k]! * B;
-      for (let b = 0; b < B; b++) this.res[i * B + b]! += c.weight[lb + b]! * d[b]!;
+      const ib = i * B;
+      if (nb === B) for (let b = 0; b < B; b++) res[ib + b]! += w[lb + b]! * d[b]!;
+      else for (let t = 0; t < nb; t++) {
+        const b = bands[t]!;
+        res[ib + b]! += w[lb + b]! * d[b]!;
+      }
       this.touch(i);
     }
     this.stats.pushes++;
@@ -193,7 +215,7 @@ export class PerturbationEvaluator {
         head = head === c.n ? 0 : head + 1;
         this.inQueue[j] = 0;
         if (!this.hot(j, theta)) continue;
-        this.pushNode(j, xr, d);
+        this.pushNode(j, xr, d, theta);
         if (++pushes > maxPushes) throw new Error("perturbation push did not converge");
         for (let k = c.adjStart[j]!; k < c.adjStart[j + 1]!; k++) {
           const i = c.adjNode[k] as number;

@@ -111,8 +111,18 @@ export function networkWarnings(c: CompiledNetwork): string[] {
   );
 }
 
+// Plain loops rather than Array.from: a result holds a row per link, and Array.from over typed
+// arrays goes through the iterator protocol.
 function levelsOf(e: Float64Array, from: number, B: number): number[] {
-  return Array.from(e.subarray(from * B, from * B + B), energyToDb);
+  const out = new Array<number>(B);
+  for (let b = 0; b < B; b++) out[b] = energyToDb(e[from * B + b]!);
+  return out;
+}
+
+function plainArray(v: Float64Array): number[] {
+  const out = new Array<number>(v.length);
+  for (let b = 0; b < v.length; b++) out[b] = v[b]!;
+  return out;
 }
 
 function aSum(e: ArrayLike<number>, aWeights: Float64Array): number {
@@ -189,7 +199,7 @@ export function solveCompiled(c: CompiledNetwork, request: SolveRequest): { resu
       return {
         id: c.linkIds[sh.link] as string,
         share: sh.aWeighted,
-        shareByBand: Array.from(sh.byBand),
+        shareByBand: plainArray(sh.byBand),
         ...(g ? { gainIfPerfectDb: g.a, gainIfPerfectByBandDb: g.byBand } : {}),
       };
     }),
