@@ -1,7 +1,7 @@
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { launchBrowser, newPage } from "../src/browser.js";
-import { createProject, getPlan, signIn, waitSaved } from "../src/editor-page.js";
+import { createProject, dragPlan, getPlan, signIn, waitSaved } from "../src/editor-page.js";
 
 const SURVEYOR = "surveyor@larkspur.example";
 const SHOTS = process.env.HUSHMARK_E2E_SHOTS; // a folder: screenshots of each step, for looking at
@@ -153,6 +153,46 @@ describe("bringing a CAD drawing into the Sketch", () => {
       await page.waitForTimeout(150);
     }
     if (SHOTS) await page.screenshot({ path: `${SHOTS}/exchange-6-ifc-added.png` });
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+  it("sets the site location in the project settings, and the Sketch's GeoJSON lands there", async () => {
+    const { context, page, errors } = await newPage(browser);
+    await signIn(page, baseUrl, SURVEYOR);
+    const projectId = await createProject(page, baseUrl, "Exchange test — site");
+    await page.goto(`${baseUrl}/projects/${projectId}/sketch`);
+    await page.getByTestId("plan-canvas").waitFor({ timeout: 20_000 });
+    await page.getByRole("button", { name: "Room", exact: true }).click();
+    await dragPlan(page, [0, 0], [4, 3]);
+    await waitSaved(page);
+
+    await page.getByRole("button", { name: "Export" }).click();
+    await expect(page.getByRole("button", { name: /^Site location…/ }).textContent()).resolves.toMatch(/not set/);
+    await page.getByRole("button", { name: /^Site location…/ }).click();
+    const dialog = page.getByRole("dialog", { name: "Project settings" });
+    await dialog.getByLabel("Latitude, degrees north").fill("123");
+    await dialog.getByRole("button", { name: "Save settings" }).click();
+    await dialog.getByText("A latitude lies between −90° and 90°.").waitFor();
+    await dialog.getByLabel("Latitude, degrees north").fill("47.3769");
+    await dialog.getByLabel("Longitude, degrees east").fill("8.5417");
+    await dialog.getByLabel(/Top of the Sketch faces/).fill("90");
+    if (SHOTS) await page.screenshot({ path: `${SHOTS}/exchange-7-site.png` });
+    await dialog.getByRole("button", { name: "Save settings" }).click();
+    await dialog.waitFor({ state: "hidden" });
+    const stored = await (await page.request.get(`${baseUrl}/api/v1/projects/${projectId}`)).json();
+    expect(stored.site).toEqual({ latDeg: 47.3769, lonDeg: 8.5417, planNorthBearingDeg: 90 });
+
+    await page.getByRole("button", { name: "Export" }).click();
+    const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Map data of this level (GeoJSON)" }).click()]);
+    const fc = JSON.parse(await (await download.createReadStream()).toArray().then((b) => Buffer.concat(b).toString("utf8")));
+    expect(fc.hushmark.frame).toBe("site");
+    const ring = fc.features.find((f: { geometry: { type: string } }) => f.geometry.type === "Polygon").geometry.coordinates[0] as Array<[number, number]>;
+    // Plan +y faces east: the room's 3 m side runs east and its 4 m side south of the site point.
+    const [lon0, lat0] = ring.reduce(([a, b], [x, y]) => [Math.min(a, x), Math.max(b, y)], [Infinity, -Infinity]);
+    expect(lon0).toBeCloseTo(8.5417, 4);
+    expect(lat0).toBeCloseTo(47.3769, 4);
+    const south = Math.min(...ring.map(([, y]) => y));
+    expect((lat0 - south) * 111_200).toBeCloseTo(4, 0); // about 111.2 km per degree of latitude, from memory
     expect(errors).toEqual([]);
     await context.close();
   });

@@ -23,6 +23,9 @@ describe("ProjectSettingsDialog", () => {
     expect(await screen.findByText("A latitude lies between −90° and 90°.")).toBeTruthy();
     expect(screen.getByText("Give the longitude in degrees.")).toBeTruthy();
     expect(calls).toHaveLength(0);
+    fireEvent.change(screen.getByLabelText("Latitude, degrees north"), { target: { value: "45" } });
+    expect(screen.queryByText("A latitude lies between −90° and 90°.")).toBeNull();
+    expect(screen.getByText("Give the longitude in degrees.")).toBeTruthy();
   });
 
   it("sends the site with a decimal comma read as a point, and the bearing", async () => {

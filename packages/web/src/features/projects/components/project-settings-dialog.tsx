@@ -27,7 +27,11 @@ export function ProjectSettingsDialog({ open, onClose, project }: { open: boolea
   const [errors, setErrors] = useState<Partial<Record<keyof Fields, string>>>({});
   const [formError, setFormError] = useState<string | null>(null);
   useEffect(() => { if (open) { setFields(fieldsOf(project)); setErrors({}); setFormError(null); } }, [open, project]);
-  const set = (k: keyof Fields) => (e: { target: { value: string } }) => setFields((f) => ({ ...f, [k]: e.target.value }));
+  const set = (k: keyof Fields) => (e: { target: { value: string } }) => {
+    setFields((f) => ({ ...f, [k]: e.target.value }));
+    // A message about the old value would mislead once the person types again.
+    setErrors(({ [k]: _gone, ...rest }) => rest);
+  };
 
   const submit = async (e: FormEvent) => {
     e.preventDefault();
