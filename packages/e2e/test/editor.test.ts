@@ -341,6 +341,48 @@ describe("the plan editor and the sound-path view", () => {
     await context.close();
   });
 
+  it("a measurement pin shows its latest reading in the details and links to that measurement", async () => {
+    const { context, page, errors } = await newPage(browser);
+    await signIn(page, baseUrl, SURVEYOR);
+    const projectId = await createProject(page, baseUrl, "Editor test — pin readings");
+    await openSketch(page, baseUrl, projectId);
+    await drawTwoRooms(page);
+    await page.getByRole("button", { name: "Pin", exact: true }).click();
+    await clickPlan(page, 1.5, 1.5);
+    await setField(page, "Label", "Bedhead");
+    await waitSaved(page);
+    const doc = (await getPlan(page, baseUrl, projectId)).document as Doc;
+    const [west, east] = ofType(doc, "room").sort((a, b) => a.outline![0]!.x - b.outline![0]!.x) as Array<{ id?: string }>;
+    const ids = Object.entries(doc.elements).filter(([, e]) => e.type === "room").map(([id]) => id);
+    const westId = ids.find((id) => doc.elements[id] === west)!, eastId = ids.find((id) => doc.elements[id] === east)!;
+    const spectrum = (peakBand: number, peakDb: number) => Array.from({ length: 21 }, (_, i) => (i === peakBand ? peakDb : 30));
+    const post = async (label: string, roomId: string, takenAt: string, leqDb: number[]) => {
+      const res = await page.request.post(`${baseUrl}/api/v1/projects/${projectId}/measurements`, { data: { label, kind: "receiver_side", takenAt, roomId, point: { x: roomId === westId ? 2 : 6, y: 1.5 }, source: "manual", leqDb } });
+      expect(res.status()).toBe(201);
+      return ((await res.json()) as { id: string }).id;
+    };
+    await post("Evening, window open", westId, "2026-11-01T19:00:00Z", spectrum(10, 55)); // 500 Hz
+    const latest = await post("Night, window shut", westId, "2026-11-20T23:30:00Z", spectrum(4, 48)); // 125 Hz
+    await post("Hall, morning", eastId, "2026-11-21T08:00:00Z", spectrum(15, 60));
+
+    await openSketch(page, baseUrl, projectId);
+    await selectInList(page, /^Select Pin Bedhead/);
+    const reading = page.getByRole("region", { name: "Latest reading" });
+    await reading.waitFor();
+    const text = await reading.innerText();
+    expect(text).toContain("Night, window shut");
+    expect(text).toMatch(/peaks at 125 Hz \(48\.0 dB\)/);
+    expect(text).not.toContain("Hall, morning");
+    await reading.getByRole("link", { name: "Open the measurement" }).click();
+    await page.waitForURL(new RegExp(`/measure\\?measurement=${latest}$`));
+    // The linked one is open, not the newest of the project (the hall's).
+    const list = page.getByTestId("measurement-list");
+    await expect(list.getByRole("button", { name: /Night, window shut/ }).getAttribute("aria-current")).resolves.toBe("true");
+    await expect(list.getByRole("button", { name: /Hall, morning/ }).getAttribute("aria-current")).resolves.toBeNull();
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
   it("exports the marked-up plan as a PNG image", async () => {
     const { context, page, errors } = await newPage(browser);
     await signIn(page, baseUrl, SURVEYOR);
