@@ -19,7 +19,9 @@ import { readIfc } from "./ifc-read.js";
  * 900 mm sill with no size attributes and no fills relation. First storey at 3000: one L-shaped
  * space, no walls.
  */
-function buildingIfc(opts: { schemaLine?: string; storeys?: boolean } = {}): string {
+function buildingIfc(opts: { schema?: "IFC4" | "IFC2X3"; storeys?: boolean } = {}): string {
+  // IFC2X3 entities have fewer attributes (no predefined types, a material is only its name).
+  const x3 = opts.schema === "IFC2X3";
   const lines: string[] = [];
   let n = 100;
   const add = (s: string): string => {
@@ -56,23 +58,23 @@ function buildingIfc(opts: { schemaLine?: string; storeys?: boolean } = {}): str
   add(`IFCRELAGGREGATES(${gid("agg2")},$,$,$,${site},(${building}))`);
   if (opts.storeys !== false) add(`IFCRELAGGREGATES(${gid("agg3")},$,$,$,${building},(${ground},${first}))`);
 
-  const material = (name: string) => add(`IFCMATERIAL('${name}',$,$)`);
+  const material = (name: string) => add(x3 ? `IFCMATERIAL('${name}')` : `IFCMATERIAL('${name}',$,$)`);
   const brick = material("Brick"), wool = material("Mineral wool"), gypsum = material("Gypsum board");
-  const layer = (m: string, t: number) => add(`IFCMATERIALLAYER(${m},${t.toFixed(1)},$,$,$,$,$)`);
-  const outerSet = add(`IFCMATERIALLAYERSET((${layer(brick, 100)},${layer(wool, 50)},${layer(gypsum, 50)}),'Brick and wool 200',$)`);
-  const studSet = add(`IFCMATERIALLAYERSET((${layer(gypsum, 12.5)},${layer(wool, 75)},${layer(gypsum, 12.5)}),'Stud partition 100',$)`);
+  const layer = (m: string, t: number) => add(`IFCMATERIALLAYER(${m},${t.toFixed(1)},$${x3 ? "" : ",$,$,$,$"})`);
+  const outerSet = add(`IFCMATERIALLAYERSET((${layer(brick, 100)},${layer(wool, 50)},${layer(gypsum, 50)}),'Brick and wool 200'${x3 ? "" : ",$"})`);
+  const studSet = add(`IFCMATERIALLAYERSET((${layer(gypsum, 12.5)},${layer(wool, 75)},${layer(gypsum, 12.5)}),'Stud partition 100'${x3 ? "" : ",$"})`);
 
   // A wall from (x0, y0) along a unit direction, centred on its axis (placement x along the wall).
   const wall = (key: string, x0: number, y0: number, ux: number, uy: number, len: number, t: number) => {
     const pl = place(groundPlace, x0, y0, 0, [ux, uy]);
-    return { id: add(`IFCWALL(${gid(key)},$,'${key}',$,$,${pl},${box(len / 2, 0, len, t, 2700)},$,.STANDARD.)`), placement: pl };
+    return { id: add(`${x3 ? "IFCWALLSTANDARDCASE" : "IFCWALL"}(${gid(key)},$,'${key}',$,$,${pl},${box(len / 2, 0, len, t, 2700)},$${x3 ? "" : ",.STANDARD."})`), placement: pl };
   };
   const south = wall("south", 0, 0, 1, 0, 8000, 200);
   const east = wall("east", 8000, 0, 0, 1, 5000, 200);
   const north = wall("north", 8000, 5000, -1, 0, 8000, 200);
   const west = wall("west", 0, 5000, 0, -1, 5000, 200);
   const partition = wall("partition", 3000, 100, 0, 1, 4800, 100);
-  add(`IFCRELASSOCIATESMATERIAL(${gid("mat-outer")},$,$,$,(${[south, east, north, west].map((w) => w.id).join(",")}),${add(`IFCMATERIALLAYERSETUSAGE(${outerSet},.AXIS2.,.POSITIVE.,-100.,$)`)})`);
+  add(`IFCRELASSOCIATESMATERIAL(${gid("mat-outer")},$,$,$,(${[south, east, north, west].map((w) => w.id).join(",")}),${add(`IFCMATERIALLAYERSETUSAGE(${outerSet},.AXIS2.,.POSITIVE.,-100.${x3 ? "" : ",$"})`)})`);
   const studType = add(`IFCWALLTYPE(${gid("stud-type")},$,'Stud partition',$,$,$,$,$,$,.PARTITIONING.)`);
   add(`IFCRELDEFINESBYTYPE(${gid("type-rel")},$,$,$,(${partition.id}),${studType})`);
   add(`IFCRELASSOCIATESMATERIAL(${gid("mat-stud")},$,$,$,(${studType}),${studSet})`);
@@ -84,16 +86,16 @@ function buildingIfc(opts: { schemaLine?: string; storeys?: boolean } = {}): str
   add(`IFCRELAGGREGATES(${gid("agg5")},$,$,$,${first},(${landing}))`);
 
   const openingPlace = place(partition.placement, 900, 0, 0);
-  const hole = add(`IFCOPENINGELEMENT(${gid("hole")},$,'Hole',$,$,${openingPlace},${box(450, 0, 900, 300, 2100)},$,.OPENING.)`);
+  const hole = add(`IFCOPENINGELEMENT(${gid("hole")},$,'Hole',$,$,${openingPlace},${box(450, 0, 900, 300, 2100)},$${x3 ? "" : ",.OPENING."})`);
   add(`IFCRELVOIDSELEMENT(${gid("voids")},$,$,$,${partition.id},${hole})`);
-  const door = add(`IFCDOOR(${gid("door")},$,'D01',$,$,${place(openingPlace, 0, 0, 0)},$,$,2100.,900.,.DOOR.,.SINGLE_SWING_LEFT.,$)`);
+  const door = add(`IFCDOOR(${gid("door")},$,'D01',$,$,${place(openingPlace, 0, 0, 0)},$,$,2100.,900.${x3 ? "" : ",.DOOR.,.SINGLE_SWING_LEFT.,$"})`);
   add(`IFCRELFILLSELEMENT(${gid("fills")},$,$,$,${hole},${door})`);
-  const windowEl = add(`IFCWINDOW(${gid("window")},$,'W01',$,$,${place(groundPlace, 5000, 0, 900)},${box(600, 0, 1200, 200, 1200)},$,$,$,.WINDOW.,.SINGLE_PANEL.,$)`);
+  const windowEl = add(`IFCWINDOW(${gid("window")},$,'W01',$,$,${place(groundPlace, 5000, 0, 900)},${box(600, 0, 1200, 200, 1200)},$,$,$${x3 ? "" : ",.WINDOW.,.SINGLE_PANEL.,$"})`);
   add(`IFCRELCONTAINEDINSPATIALSTRUCTURE(${gid("contains")},$,$,$,(${[south, east, north, west, partition].map((w) => w.id).join(",")},${door},${windowEl}),${ground})`);
 
   return [
     "ISO-10303-21;", "HEADER;", "FILE_DESCRIPTION(('ViewDefinition [DesignTransferView]'),'2;1');",
-    "FILE_NAME('block.ifc','2026-01-01T00:00:00',(''),(''),'','','');", opts.schemaLine ?? "FILE_SCHEMA(('IFC4'));", "ENDSEC;",
+    "FILE_NAME('block.ifc','2026-01-01T00:00:00',(''),(''),'','','');", `FILE_SCHEMA(('${x3 ? "IFC2X3" : "IFC4"}'));`, "ENDSEC;",
     "DATA;", ...lines, "ENDSEC;", "END-ISO-10303-21;", "",
   ].join("\n");
 }
@@ -199,6 +201,19 @@ describe("readIfc and convertIfc", () => {
     const door = Object.values(step.plan.elements).find((e) => e.type === "door")!;
     const place = door.type === "door" ? openingPlacement(step.plan, planWallPieces(step.plan), door, step.plan.defaults.wallToleranceM) : null;
     expect(place?.ok && place.start.y).toBeCloseTo(1.0, 6);
+  });
+
+  it("reads the same building written as IFC2X3 (standard-case walls, shorter entities) to the same result", () => {
+    const four = readIfc(api, bytes(buildingIfc()));
+    const old = readIfc(api, bytes(buildingIfc({ schema: "IFC2X3" })));
+    if (!four.ok || !old.ok) throw new Error("a file did not read");
+    expect(old.model.schema).toBe("IFC2X3");
+    expect(old.model.byType.IfcWallStandardCase).toEqual({ read: 5, used: 5, skipped: 0 });
+    const a = convertIfc(four.model), b = convertIfc(old.model);
+    expect(b.report.converted).toEqual(a.report.converted);
+    expect(b.report.rooms.map((r) => [r.name, r.planAreaM2.toFixed(6)])).toEqual(a.report.rooms.map((r) => [r.name, r.planAreaM2.toFixed(6)]));
+    expect(b.openings.map((o) => [o.type, o.widthM.toFixed(6), o.heightM.toFixed(6), o.offsetM.toFixed(6)])).toEqual(a.openings.map((o) => [o.type, o.widthM.toFixed(6), o.heightM.toFixed(6), o.offsetM.toFixed(6)]));
+    expect(b.report.wallLayers.map((w) => w.layers.map((l) => l.material).join("/"))).toEqual(a.report.wallLayers.map((w) => w.layers.map((l) => l.material).join("/")));
   });
 
   it("leaves out storeys not chosen and puts a storey onto an existing level", () => {
