@@ -94,6 +94,8 @@ export const proposalSchema = z.object({
   status: proposalStatusSchema,
   currentVersion: z.number().int(),
   content: proposalContentSchema,
+  /** The plan document the shown version was made on (the marked-up plan draws it, not today's plan). */
+  planDocument: z.record(z.string(), z.unknown()),
   versions: z.array(proposalVersionSchema),
   comments: z.array(proposalCommentSchema),
   payments: z.array(paymentSchema),

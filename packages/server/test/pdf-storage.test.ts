@@ -8,7 +8,7 @@ import { createObjectStorage, type ObjectStorage } from "../src/files/object-sto
 import { StoredFile } from "../src/files/stored-file.entity.js";
 import { PdfsInObjectStorage1796159000000 } from "../src/migrations/1796159000000-PdfsInObjectStorage.js";
 import { renderProposalVersion } from "../src/proposals/proposal-pdf-job.js";
-import { pricedProject, SETUP, startMoneyHarness, until, type MoneyHarness } from "./money-harness.js";
+import { demoPlan, pricedProject, SETUP, startMoneyHarness, until, type MoneyHarness } from "./money-harness.js";
 
 const BUCKET = "hushmark-money-test";
 
@@ -129,34 +129,54 @@ describe("proposal PDFs and closing reports in object storage", () => {
     expect(await objects()).toHaveLength(2); // the proposal's PDF and the report
   });
 
+  it("shows the client the plan the version was made on, not the plan as changed since", async () => {
+    const now = await p.owner.get(`/api/v1/projects/${p.projectId}/plan`);
+    const changed = await p.owner.put(`/api/v1/projects/${p.projectId}/plan`).send({ baseVersion: now.body.version, document: { ...demoPlan, name: "Changed after the proposal" } });
+    expect(changed.status).toBe(200);
+    const shown = await p.planner.get(`/api/v1/proposals/${proposalId}`);
+    expect(shown.status).toBe(200);
+    expect(shown.body.planDocument.name).toBe(demoPlan.name);
+    expect(Object.keys(shown.body.planDocument.elements)).toContain("door-studio");
+  });
+
   it("the migration moves existing PDF bytes to the store and back", async () => {
     const migration = new PdfsInObjectStorage1796159000000();
     const previous = { endpoint: process.env.HUSHMARK_S3_ENDPOINT, bucket: process.env.HUSHMARK_S3_BUCKET };
     process.env.HUSHMARK_S3_ENDPOINT = h.s3.endpoint;
     process.env.HUSHMARK_S3_BUCKET = BUCKET;
     const runner = h.dataSource.createQueryRunner();
+    // In one transaction that is rolled back: the shared test database also holds other files'
+    // proposals, whose PDFs are in stores that are gone, so they are set aside first.
+    await runner.startTransaction();
     try {
+      await runner.query(`UPDATE proposal_versions SET pdf_file_id = NULL WHERE proposal_id <> $1`, [proposalId]);
+      await runner.query(`UPDATE verifications SET report_file_id = NULL WHERE proposal_id <> $1`, [proposalId]);
       const [stored] = (await pdfRecords()).filter((r) => r.originalName.startsWith("proposal-"));
       const bytes = await readAll(await storage.get(stored!.objectKey));
       await migration.down(runner);
       const [row] = await runner.query(`SELECT pdf FROM proposal_versions WHERE proposal_id = $1 AND version = 1`, [proposalId]);
       expect(Buffer.from(row.pdf).equals(bytes)).toBe(true);
-      expect(await pdfRecords()).toHaveLength(0);
+      const [{ count }] = await runner.query(`SELECT count(*)::int AS count FROM stored_files WHERE project_id = $1 AND content_type = 'application/pdf'`, [p.projectId]);
+      expect(count).toBe(0);
 
       await migration.up(runner);
-      const [moved] = await runner.query(`SELECT f.object_key, f.size_bytes, f.sha256 FROM proposal_versions v JOIN stored_files f ON f.id = v.pdf_file_id WHERE v.proposal_id = $1 AND v.version = 1`, [proposalId]);
+      const [moved] = await runner.query(`SELECT f.object_key, f.size_bytes, f.sha256, f.state FROM proposal_versions v JOIN stored_files f ON f.id = v.pdf_file_id WHERE v.proposal_id = $1 AND v.version = 1`, [proposalId]);
       expect(moved.object_key).not.toBe(stored!.objectKey);
+      expect(moved.state).toBe("stored");
       expect(Number(moved.size_bytes)).toBe(bytes.length);
       expect(moved.sha256).toBe(stored!.sha256);
       expect((await readAll(await storage.get(moved.object_key))).equals(bytes)).toBe(true);
-      const served = await download(`/api/v1/proposals/${proposalId}/versions/1/pdf`);
-      expect(served!.equals(bytes)).toBe(true);
+      const columns: { column_name: string }[] = await runner.query(`SELECT column_name FROM information_schema.columns WHERE table_name = 'proposal_versions'`);
+      expect(columns.map((c) => c.column_name)).not.toContain("pdf");
     } finally {
+      await runner.rollbackTransaction();
       await runner.release();
       process.env.HUSHMARK_S3_ENDPOINT = previous.endpoint;
       process.env.HUSHMARK_S3_BUCKET = previous.bucket;
       if (previous.endpoint === undefined) delete process.env.HUSHMARK_S3_ENDPOINT;
       if (previous.bucket === undefined) delete process.env.HUSHMARK_S3_BUCKET;
     }
+    // Rolled back: the version still serves the PDF it had.
+    expect(await download(`/api/v1/proposals/${proposalId}/versions/1/pdf`)).toBeDefined();
   });
 });

@@ -67,6 +67,7 @@ export function createProposalsService(dataSource: DataSource, deps: { projects:
       status,
       currentVersion: version,
       content: proposalContentSchema.parse(current.content),
+      planDocument: current.planDocument,
       versions: shown.map((v) => ({ version: v.version, createdAt: v.createdAt.toISOString(), sentAt: v.sentAt?.toISOString() ?? null, pdf: v.pdfStatus as "pending" | "ready" | "failed" })),
       comments: cs.map((c) => ({ id: c.id, version: c.version, kind: c.kind as "comment" | "changes_asked" | "approved", body: c.body, authorName: c.authorName, authorRole: c.authorRole, createdAt: c.createdAt.toISOString() })),
       payments: ps.map((p) => ({ id: p.id, version: p.version, amount: p.amountMinor / 100, currency: p.currency, status: p.status as "pending" | "paid" | "failed", failureMessage: p.failureMessage, createdAt: p.createdAt.toISOString(), paidAt: p.paidAt?.toISOString() ?? null })),

@@ -58,7 +58,7 @@ export default function ProposalSection({ projectId }: { projectId: string }) {
         <CardHeader title={p.content.title} description={<>Version {p.currentVersion} · {formatMoney(p.content.total, p.content.currency)} · valid until {p.content.validUntil}</>} actions={<Badge tone={statusWords[p.status].tone}>{statusWords[p.status].label}</Badge>} />
         <StateLine status={p.status} />
         <div className="p-5">
-          <ProposalBody proposal={p} document={plan.data?.version ? plan.data.document : null} />
+          <ProposalBody proposal={p} document={Object.keys(p.planDocument).length ? p.planDocument : plan.data?.version ? plan.data.document : null} />
         </div>
       </Card>
       <div className="grid gap-5 lg:grid-cols-2">
