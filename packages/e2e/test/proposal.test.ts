@@ -185,6 +185,7 @@ describe("from a scenario to a paid deposit, in the browser", () => {
     // A click on empty ground (the canvas corner, off the plan) picks nothing.
     const corner = (await page.getByTestId("plan-canvas").boundingBox())!;
     await page.mouse.click(corner.x + 12, corner.y + 12);
+    await panel.getByText(/^Click a wall part, door, window, vent or room on the plan/).waitFor();
     await expect(panel.getByText("Studio door", { exact: true }).count()).resolves.toBe(0);
 
     const name = "Door picked on the plan";
