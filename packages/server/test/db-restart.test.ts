@@ -46,7 +46,9 @@ describe("database restarted during saves", () => {
     expect(signUp.status).toBe(201);
     const projectId = (await call("POST", "/api/v1/projects", { title: "Through a restart" })).body.id as string;
     const initial = await call("GET", `/api/v1/projects/${projectId}/plan`);
-    const document = initial.body.document as Record<string, unknown>;
+    // Some 600 kB of survey notes, so a save is usually on its way when PostgreSQL goes down.
+    const notes = Object.fromEntries(Array.from({ length: 1500 }, (_, i) => [`note-${i}`, { type: "note", id: `note-${i}`, levelId: "level-1", position: { x: i % 14, y: i % 9 }, text: `Survey note ${i} `.repeat(20) }]));
+    const document = { ...(initial.body.document as Record<string, unknown>), elements: { ...(initial.body.document.elements as object), ...notes } };
     let version = initial.body.version as number;
 
     const outcomes: Outcome[] = [];
@@ -81,7 +83,8 @@ describe("database restarted during saves", () => {
     running = false;
     await saver;
 
-    const log = () => `${outcomes.map((o) => `${o.status}${o.version ? `→v${o.version}` : ""}`).join(" ")}\n${server!.output().slice(-3000)}`;
+    const errors = () => server!.output().split("\n").filter((l) => l.includes('"level":50')).join("\n").slice(0, 4000);
+    const log = () => `${outcomes.map((o) => `${o.status}${o.version ? `→v${o.version}` : ""}`).join(" ")}\n${errors()}`;
     expect(health.status, log()).toBe(503);
     const refused = outcomes.filter((o) => o.status !== 200 && o.status !== 409);
     expect(refused.length, log()).toBeGreaterThan(0);

@@ -56,8 +56,8 @@ describe("server process killed", () => {
     const call = person(() => server!.base);
     expect((await call("POST", "/api/v1/auth/sign-up", { firmName: "Kill Firm", displayName: "Owner", email: uniqueEmail("kill"), password: PASSWORD })).status).toBe(201);
     const projectId = (await call("POST", "/api/v1/projects", { title: "Killed while saving" })).body.id as string;
-    // About 1 MB of notes so that a save spends a while in the process and in the transaction.
-    const notes = Object.fromEntries(Array.from({ length: 3000 }, (_, i) => [`note-${i}`, { type: "note", id: `note-${i}`, levelId: "ground", position: { x: i % 14, y: i % 9 }, text: `Survey note ${i} `.repeat(15) }]));
+    // About 700 kB of notes so that a save spends a while in the process and in the transaction.
+    const notes = Object.fromEntries(Array.from({ length: 2000 }, (_, i) => [`note-${i}`, { type: "note", id: `note-${i}`, levelId: "ground", position: { x: i % 14, y: i % 9 }, text: `Survey note ${i} `.repeat(15) }]));
     const big = { ...demoPlan, elements: { ...(demoPlan.elements as object), ...notes } };
     const sent = new Set<string>();
     const acknowledged = new Map<number, string>();
@@ -78,7 +78,10 @@ describe("server process killed", () => {
           else throw new Error(`a save answered ${res.status}: ${JSON.stringify(res.body).slice(0, 300)}`);
         }
       })();
-      await new Promise((r) => setTimeout(r, 400 + Math.floor(Math.random() * 800)));
+      // At least one save of this round in, then the kill at a random moment of the next ones.
+      const acked = acknowledged.size;
+      for (let i = 0; i < 200 && acknowledged.size === acked; i += 1) await new Promise((r) => setTimeout(r, 50));
+      await new Promise((r) => setTimeout(r, Math.floor(Math.random() * 600)));
       expect(await server!.kill("SIGKILL")).toBe("SIGKILL");
       running = false;
       await saver;

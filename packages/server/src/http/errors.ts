@@ -27,14 +27,14 @@ export function fieldIssues(error: ZodError): { path: string; message: string }[
 }
 
 /** SQLSTATE classes and driver messages that mean the database went away, not that the request was wrong. */
-const UNAVAILABLE_CODES = new Set(["57P01", "57P02", "57P03", "08000", "08003", "08006", "08001", "08004", "ECONNREFUSED", "ECONNRESET"]);
+const UNAVAILABLE_CODES = new Set(["57P01", "57P02", "57P03", "08000", "08003", "08006", "08001", "08004", "ECONNREFUSED", "ECONNRESET", "EPIPE", "ETIMEDOUT"]);
 
-function isDatabaseUnavailable(error: unknown): boolean {
+export function isDatabaseUnavailable(error: unknown): boolean {
   const e = error as { code?: string; driverError?: { code?: string; message?: string }; message?: string };
   const code = e.driverError?.code ?? e.code;
   if (code && UNAVAILABLE_CODES.has(code)) return true;
   const message = `${e.driverError?.message ?? ""} ${e.message ?? ""}`;
-  return /Connection terminated|connection timeout|terminating connection|Client has encountered a connection error/i.test(message);
+  return /Connection terminated|connection timeout|timeout exceeded when trying to connect|terminating connection|Client has encountered a connection error|Client was closed and is not queryable|the database system is (shutting down|starting up)/i.test(message);
 }
 
 interface BodyParserError extends Error {
