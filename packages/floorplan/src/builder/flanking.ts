@@ -24,12 +24,6 @@ function element(ref: string, c: Construction, areaM2: number) {
   return { ref, tl_db: c.tlDb, area_m2: areaM2, mass_kg_m2: Math.max(c.surfaceDensityKgM2, 0.1) };
 }
 
-function distinctDirections(j: Junction): number {
-  const dirs: Array<[number, number]> = [];
-  for (const a of j.arms) if (!dirs.some(([x, y]) => x * a.dx + y * a.dy > 0.999)) dirs.push([a.dx, a.dy]);
-  return dirs.length;
-}
-
 /**
  * Flanking links by the simplified ISO 12354-1 model (Ff paths only): at each end of a shared
  * wall, the walls of the two rooms that continue straight through the junction (a façade or a
@@ -49,7 +43,7 @@ export function buildFlankingLinks(ctx: BuildContext, pruneDb = FLANKING_PRUNE_D
     }
   }
   const pieceById = new Map(ctx.pieces.map((p) => [p.id, p]));
-  const hasRoom = (p: WallPiece, roomId: string) => p.sides.some((s) => s.roomId === roomId);
+  const hasRoom = (p: WallPiece, roomId: string) => p.sides[0]?.roomId === roomId || p.sides[1]?.roomId === roomId;
 
   for (const s of ctx.pieces) {
     if (s.kind !== "shared") continue;
@@ -63,7 +57,8 @@ export function buildFlankingLinks(ctx: BuildContext, pruneDb = FLANKING_PRUNE_D
     for (const end of ["start", "end"] as const) {
       const j = at.get(s.id)?.[end];
       if (!j) continue;
-      const kind = distinctDirections(j) >= 4 ? "cross" : "t";
+      // wallJunctions already counted the distinct directions (four or more: a cross).
+      const kind = j.kind === "cross" ? "cross" : "t";
       for (const armI of j.arms) {
         const pi = pieceById.get(armI.pieceId)!;
         if (pi === s || !hasRoom(pi, a) || hasRoom(pi, b)) continue;

@@ -37,7 +37,11 @@ export function armsInline(a: JunctionArm, b: JunctionArm): boolean {
 /** Groups segment ends lying within `toleranceM` of each other into junctions (m). */
 export function wallJunctions(segments: readonly SegmentLike[], toleranceM: number): Junction[] {
   const cell = Math.max(toleranceM, 1e-6) * 2;
-  const grid = new Map<string, number[]>();
+  // Grid cells by a number, not a "cx,cy" string: one look-up per neighbouring cell per end.
+  // Keys are unique while |cy| < 2^20 cells (100 km at 0.1 m); beyond, two cells may share a
+  // key, which only adds candidates — every union still checks the distance.
+  const cellKey = (cx: number, cy: number) => cx * 2097152 + cy;
+  const grid = new Map<number, number[]>();
   const points: Array<{ p: Point; arm: JunctionArm }> = [];
   for (const s of segments) {
     const len = Math.hypot(s.end.x - s.start.x, s.end.y - s.start.y);
@@ -52,13 +56,13 @@ export function wallJunctions(segments: readonly SegmentLike[], toleranceM: numb
     const cx = Math.floor(p.x / cell), cy = Math.floor(p.y / cell);
     for (let dx = -1; dx <= 1; dx++) {
       for (let dy = -1; dy <= 1; dy++) {
-        for (const j of grid.get(`${cx + dx},${cy + dy}`) ?? []) {
+        for (const j of grid.get(cellKey(cx + dx, cy + dy)) ?? []) {
           const q = points[j]!.p;
           if (Math.hypot(q.x - p.x, q.y - p.y) <= toleranceM + 1e-9) parent[find(i)] = find(j);
         }
       }
     }
-    const key = `${cx},${cy}`;
+    const key = cellKey(cx, cy);
     const list = grid.get(key) ?? [];
     list.push(i);
     grid.set(key, list);
