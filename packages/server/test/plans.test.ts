@@ -1,3 +1,4 @@
+import { readFile } from "node:fs/promises";
 import type supertest from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { addMember, newFirm, startHarness, type Harness } from "./harness.js";
@@ -60,5 +61,18 @@ describe("versioned plan saves", () => {
     expect(stored.body.document).toEqual(accepted[0]!.body.document);
     const revisions = await owner.get(`/api/v1/projects/${projectId}/plan/revisions`);
     expect(revisions.body.revisions[0].version).toBe(base + 1);
+  });
+
+  it("sends a large plan gzip-compressed to a client that accepts it, unchanged once unpacked", async () => {
+    const demo = JSON.parse(await readFile(new URL("../../../examples/fernhollow-studio.plan.json", import.meta.url), "utf8"));
+    const base = (await owner.get(`/api/v1/projects/${projectId}/plan`)).body.version as number;
+    const saved = await surveyor.put(`/api/v1/projects/${projectId}/plan`).send({ baseVersion: base, document: demo });
+    expect(saved.status, JSON.stringify(saved.body)).toBe(200);
+    const zipped = await owner.get(`/api/v1/projects/${projectId}/plan`).set("accept-encoding", "gzip");
+    expect(zipped.headers["content-encoding"]).toBe("gzip");
+    const plain = await owner.get(`/api/v1/projects/${projectId}/plan`).set("accept-encoding", "identity");
+    expect(plain.headers["content-encoding"]).toBeUndefined();
+    expect(zipped.body).toEqual(plain.body);
+    expect(plain.body.document.elements.length).toBe(demo.elements.length);
   });
 });
