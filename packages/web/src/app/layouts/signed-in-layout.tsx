@@ -5,6 +5,7 @@ import { Wordmark } from "../../components/ui/wordmark";
 import { paths, signInWithNext } from "../../config/paths";
 import { useMe } from "../../features/auth/api/get-me";
 import { CurrentMeContext } from "../../features/auth/components/current-me-context";
+import { useEarlyPlan } from "../../features/projects/api/use-early-plan";
 import { FirmSwitcher } from "../../features/auth/components/firm-switcher";
 import { UserMenu } from "../../features/auth/components/user-menu";
 import { isApiError } from "../../lib/api-client";
@@ -18,6 +19,7 @@ function navClasses({ isActive }: { isActive: boolean }): string {
 export function SignedInLayout() {
   const me = useMe();
   const location = useLocation();
+  useEarlyPlan(location.pathname);
 
   if (me.isPending) return <PageLoading label="Checking your session" />;
   if (me.isError) {

@@ -1,6 +1,4 @@
-import { lazy, Suspense, useEffect, type ComponentType, type LazyExoticComponent } from "react";
-import { useQueryClient } from "@tanstack/react-query";
-import { planQueryOptions } from "../../features/projects/api/get-plan";
+import { lazy, Suspense, type ComponentType, type LazyExoticComponent } from "react";
 import { useParams } from "react-router-dom";
 import { EmptyState } from "../../components/ui/empty-state";
 import { useCurrentMe } from "../../features/auth/components/use-current-me";
@@ -24,12 +22,7 @@ const moneySections: Record<string, LazyExoticComponent<ComponentType<{ projectI
 export function ProjectSectionRoute({ section }: { section: ProjectSection }) {
   const { projectId = "" } = useParams();
   const me = useCurrentMe();
-  // The plan starts loading while the editor's code does, not after it.
-  const queryClient = useQueryClient();
-  const needsPlan = section.slug === "sketch" || section.slug === "paths";
-  useEffect(() => {
-    if (needsPlan && projectId) void queryClient.prefetchQuery(planQueryOptions(projectId));
-  }, [needsPlan, projectId, queryClient]);
+  // The plan itself starts loading in the signed-in layout (useEarlyPlan), beside the session check.
 
   if (!section.clientVisible && !can.seeAllSections(me.membership.role)) {
     return <EmptyState title={`${section.label} is for the firm's team`}>Your contractor shares the plan, the sound paths, the proposal and the verification with you.</EmptyState>;
