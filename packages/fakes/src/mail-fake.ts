@@ -6,6 +6,8 @@ import { SMTPServer } from "smtp-server";
 /** One message the fake received, as its HTTP API answers it. */
 export interface ReceivedMail {
   id: string;
+  /** The Message-ID header as sent (empty if the sender gave none), so a repeated send is recognisable. */
+  messageId: string;
   from: string;
   to: string[];
   subject: string;
@@ -64,6 +66,7 @@ export async function startMailFake(options: MailFakeOptions = {}): Promise<Mail
           const links = [...new Set([...(text.match(LINK_PATTERN) ?? []), ...(html.match(LINK_PATTERN) ?? [])])];
           store.push({
             id: String(counter),
+            messageId: mail.messageId ?? "",
             from: addressList(mail.from)[0] ?? "",
             to: addressList(mail.to),
             subject: mail.subject ?? "",
