@@ -1,3 +1,4 @@
+import { workerChannel } from "./worker-channel";
 import { dxfSurvey, importDxf, type DxfImportOptions, type DxfImportResult, type DxfSurvey } from "@hushmark/floorplan";
 
 /** Reads a DXF file's layers and converts it, reporting progress as entity counts. */
@@ -28,36 +29,19 @@ export function inlineDxfRunner(): DxfRunner {
 
 /** Runs in a module worker, so a drawing of tens of MB converts without freezing the page. */
 export function workerDxfRunner(): DxfRunner {
-  const worker = new Worker(new URL("./dxf-import.worker.ts", import.meta.url), { type: "module" });
-  let seq = 0;
-  const waiting = new Map<number, { resolve: (r: WorkerReply) => void; onProgress?: (done: number, total: number) => void }>();
-  worker.onmessage = (event: MessageEvent<WorkerReply>) => {
-    const reply = event.data;
-    const w = waiting.get(reply.id);
-    if (!w) return;
-    if (reply.kind === "progress") w.onProgress?.(reply.done, reply.total);
-    else {
-      waiting.delete(reply.id);
-      w.resolve(reply);
-    }
-  };
-  const ask = (request: WorkerRequest, onProgress?: (done: number, total: number) => void) =>
-    new Promise<WorkerReply>((resolve) => {
-      waiting.set(request.id, { resolve, ...(onProgress ? { onProgress } : {}) });
-      worker.postMessage(request);
-    });
+  const channel = workerChannel<WorkerRequest, WorkerReply>(new Worker(new URL("./dxf-import.worker.ts", import.meta.url), { type: "module" }), "The DXF reader could not start.");
   return {
     async survey(file) {
-      const reply = await ask({ id: ++seq, kind: "survey", file });
+      const reply = await channel.ask({ kind: "survey", file });
       if (reply.kind === "survey") return reply.survey;
       throw new Error(reply.kind === "failed" ? reply.message : "The drawing could not be read.");
     },
     async convert(file, options, onProgress) {
-      const reply = await ask({ id: ++seq, kind: "convert", file, options }, onProgress);
+      const reply = await channel.ask({ kind: "convert", file, options }, onProgress);
       if (reply.kind === "converted") return reply.result;
       throw new Error(reply.kind === "failed" ? reply.message : "The drawing could not be converted.");
     },
-    dispose: () => worker.terminate(),
+    dispose: channel.dispose,
   };
 }
 

@@ -1,4 +1,5 @@
 import type { IfcAPI } from "web-ifc";
+import { workerChannel } from "./worker-channel";
 import { convertIfc, ifcSurvey, readIfc, type IfcImport, type IfcImportOptions, type IfcModelRead, type IfcProblem, type IfcSurvey } from "@hushmark/floorplan/ifc";
 
 export type IfcReadReply = { ok: true; survey: IfcSurvey } | { ok: false; problem: IfcProblem };
@@ -48,39 +49,18 @@ export function inlineIfcRunner(reader: () => Promise<IfcAPI>): IfcRunner {
 
 /** Runs in a module worker with the bundled WebAssembly reader, so a model of tens of MB never freezes the page. */
 export function workerIfcRunner(): IfcRunner {
-  const worker = new Worker(new URL("./ifc-import.worker.ts", import.meta.url), { type: "module" });
-  let seq = 0;
-  const waiting = new Map<number, { resolve: (r: IfcWorkerReply) => void; onProgress?: (done: number, total: number) => void }>();
-  worker.onmessage = (event: MessageEvent<IfcWorkerReply>) => {
-    const reply = event.data;
-    const w = waiting.get(reply.id);
-    if (!w) return;
-    if (reply.kind === "progress") w.onProgress?.(reply.done, reply.total);
-    else {
-      waiting.delete(reply.id);
-      w.resolve(reply);
-    }
-  };
-  worker.onerror = (event) => {
-    for (const [id, w] of waiting) w.resolve({ id, kind: "failed", message: event.message || "The IFC reader could not start." });
-    waiting.clear();
-  };
-  const ask = (request: IfcWorkerRequest, onProgress?: (done: number, total: number) => void) =>
-    new Promise<IfcWorkerReply>((resolve) => {
-      waiting.set(request.id, { resolve, ...(onProgress ? { onProgress } : {}) });
-      worker.postMessage(request);
-    });
+  const channel = workerChannel<IfcWorkerRequest, IfcWorkerReply>(new Worker(new URL("./ifc-import.worker.ts", import.meta.url), { type: "module" }), "The IFC reader could not start.");
   return {
     async read(file, onProgress) {
-      const reply = await ask({ id: ++seq, kind: "read", file }, onProgress);
+      const reply = await channel.ask({ kind: "read", file }, onProgress);
       if (reply.kind === "read") return reply.reply;
       throw new Error(reply.kind === "failed" ? reply.message : "The model could not be read.");
     },
     async convert(options) {
-      const reply = await ask({ id: ++seq, kind: "convert", options });
+      const reply = await channel.ask({ kind: "convert", options });
       if (reply.kind === "converted") return reply.imported;
       throw new Error(reply.kind === "failed" ? reply.message : "The model could not be converted.");
     },
-    dispose: () => worker.terminate(),
+    dispose: channel.dispose,
   };
 }
