@@ -59,8 +59,6 @@ export class PerturbationEvaluator {
   private readonly isTouched: Uint8Array;
   private readonly queue: Int32Array;
   private readonly inQueue: Uint8Array;
-  /** Scratch: the bands one push relaxes. */
-  private readonly bands: Int32Array;
   private touchedCount = 0;
 
   constructor(
@@ -73,7 +71,6 @@ export class PerturbationEvaluator {
     this.isTouched = new Uint8Array(n);
     this.queue = new Int32Array(n + 1);
     this.inQueue = new Uint8Array(n);
-    this.bands = new Int32Array(B);
   }
 
   /** Receiver energy per band after the perturbation. */
@@ -147,37 +144,37 @@ export class PerturbationEvaluator {
   }
 
   /**
-   * Relaxes node j in the bands where its residual still matters (z·|r| above that band's
-   * threshold) and hands it on to the neighbours in those bands only; the other bands keep their
-   * small residual, which the error bound counts. Each band is its own system, so late pushes
-   * that only the slow low bands still need do not pay for every band.
+   * Relaxes node j over the window of bands where its residual still matters (z·|r| above that
+   * band's threshold) and hands it on to the neighbours in that window only; bands outside keep
+   * their small residual, which the error bound counts (relaxing a band inside the window that
+   * did not need it is exact too). Each band is its own system, so the late pushes that only the
+   * slow low bands still need do not pay for all of them; a push every band needs costs as before.
    */
   private pushNode(j: number, xr: Float64Array, d: Float64Array, theta: Float64Array): void {
     const { c, ex, receiver, z } = this.base;
     const B = c.B;
     const res = this.res;
-    const bands = this.bands;
-    let nb = 0;
+    const jb = j * B;
+    let lo = B;
+    let hi = 0;
     for (let b = 0; b < B; b++) {
-      const r = res[j * B + b]!;
-      if (z[j * B + b]! * Math.abs(r) > theta[b]!) {
-        d[b] = r / c.absorption[j * B + b]!;
-        res[j * B + b] = 0;
-        bands[nb++] = b;
+      if (z[jb + b]! * Math.abs(res[jb + b]!) > theta[b]!) {
+        if (b < lo) lo = b;
+        hi = b + 1;
       }
     }
-    if (j === receiver) for (let t = 0; t < nb; t++) xr[bands[t]!]! += d[bands[t]!]!;
+    for (let b = lo; b < hi; b++) {
+      d[b] = res[jb + b]! / c.absorption[jb + b]!;
+      res[jb + b] = 0;
+    }
+    if (j === receiver) for (let b = lo; b < hi; b++) xr[b]! += d[b]!;
     const w = c.weight;
     for (let k = c.adjStart[j]!; k < c.adjStart[j + 1]!; k++) {
       const i = c.adjNode[k] as number;
       if (ex.fixed[i]) continue;
       const lb = c.adjLink[k]! * B;
       const ib = i * B;
-      if (nb === B) for (let b = 0; b < B; b++) res[ib + b]! += w[lb + b]! * d[b]!;
-      else for (let t = 0; t < nb; t++) {
-        const b = bands[t]!;
-        res[ib + b]! += w[lb + b]! * d[b]!;
-      }
+      for (let b = lo; b < hi; b++) res[ib + b]! += w[lb + b]! * d[b]!;
       this.touch(i);
     }
     this.stats.pushes++;
