@@ -35,6 +35,11 @@ export function SignedInLayout() {
   }
 
   const { role } = me.data.membership;
+  const links = [
+    { to: paths.projects, label: "Projects" },
+    ...(can.seeAllSections(role) ? [{ to: paths.priceBook, label: "Price book" }] : []),
+    ...(can.managePeople(role) ? [{ to: paths.people, label: "People" }] : []),
+  ];
   return (
     <CurrentMeContext value={me.data}>
     <div className="flex min-h-screen flex-col">
@@ -42,30 +47,23 @@ export function SignedInLayout() {
         Skip to content
       </a>
       <header className="sticky top-0 z-10 border-b border-rule bg-panel/95 backdrop-blur">
-        <div className="mx-auto flex max-w-6xl items-center gap-3 px-4 py-1.5">
-          <Link to={paths.projects} aria-label="Hushmark home" className="flex min-h-11 items-center rounded-md">
+        <div className="mx-auto flex max-w-6xl items-center gap-2 px-3 py-1.5 sm:gap-3 sm:px-4">
+          <Link to={paths.projects} aria-label="Hushmark home" className="flex min-h-11 shrink-0 items-center rounded-md">
             <Wordmark />
           </Link>
-          <span aria-hidden="true" className="h-6 w-px bg-rule" />
+          <span aria-hidden="true" className="h-6 w-px shrink-0 bg-rule" />
           <div className="min-w-0 flex-1">
             <FirmSwitcher me={me.data} />
           </div>
-          <nav aria-label="Main" className="flex items-center gap-1">
-            <NavLink to={paths.projects} className={navClasses}>
-              Projects
-            </NavLink>
-            {can.seeAllSections(role) ? (
-              <NavLink to={paths.priceBook} className={navClasses}>
-                Price book
+          {/* Below the tablet width the links move into the account menu, so the bar never overlaps. */}
+          <nav aria-label="Main" className="hidden items-center gap-1 md:flex">
+            {links.map((link) => (
+              <NavLink key={link.to} to={link.to} className={navClasses}>
+                {link.label}
               </NavLink>
-            ) : null}
-            {can.managePeople(role) ? (
-              <NavLink to={paths.people} className={navClasses}>
-                People
-              </NavLink>
-            ) : null}
+            ))}
           </nav>
-          <UserMenu me={me.data} />
+          <UserMenu me={me.data} links={links} />
         </div>
       </header>
       <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 sm:py-8">

@@ -14,7 +14,7 @@ export function FirmSwitcher({ me }: { me: Me }) {
   const switchFirm = useSwitchFirm({ leave: () => navigate(paths.projects) });
 
   if (me.memberships.length < 2) {
-    return <span className="truncate text-sm font-medium text-muted">{me.membership.organizationName}</span>;
+    return <span className="block truncate text-sm font-medium text-muted" title={me.membership.organizationName}>{me.membership.organizationName}</span>;
   }
 
   return (

@@ -1,4 +1,4 @@
-import { fireEvent, screen, waitFor } from "@testing-library/react";
+import { fireEvent, screen, waitFor, within } from "@testing-library/react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { meAs, notSignedIn } from "../../../test/fixtures";
 import { renderApp, routeFetch } from "../../../test/render-app";
@@ -31,5 +31,28 @@ describe("signing out", () => {
     await waitFor(() => expect(queryClient.getQueryData(["projects", "list"])).toBeUndefined());
     // Nothing asked for the firm's projects again after the session ended.
     expect(calls.filter((call) => call === "GET /api/v1/projects")).toHaveLength(1);
+  });
+});
+
+describe("the account menu on a phone", () => {
+  it("carries the main links the top bar hides there, and following one closes it", async () => {
+    const { fetchMock } = routeFetch((key) => {
+      if (key === "GET /api/v1/auth/me") return { status: 200, body: meAs("owner") };
+      if (key === "GET /api/v1/projects") return { status: 200, body: { projects: [] } };
+      if (key === "GET /api/v1/organization/members") return { status: 200, body: { members: [], invitations: [] } };
+      return undefined;
+    });
+    vi.stubGlobal("fetch", fetchMock);
+    const { router } = renderApp("/projects");
+    const button = await screen.findByRole("button", { name: "Account menu for Wren Adair" });
+    expect(screen.getAllByRole("navigation", { name: "Main" })).toHaveLength(1);
+    fireEvent.click(button);
+    const menuNavs = screen.getAllByRole("navigation", { name: "Main" });
+    expect(menuNavs).toHaveLength(2);
+    const inMenu = within(menuNavs[1]!).getAllByRole("link").map((link) => link.textContent);
+    expect(inMenu).toEqual(["Projects", "Price book", "People"]);
+    fireEvent.click(within(menuNavs[1]!).getByRole("link", { name: "People" }));
+    await waitFor(() => expect(router.state.location.pathname).toBe("/people"));
+    expect(button.getAttribute("aria-expanded")).toBe("false");
   });
 });
