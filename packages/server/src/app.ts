@@ -23,6 +23,7 @@ import { errorHandler, HttpError } from "./http/errors.js";
 import { healthRouter } from "./http/health.js";
 import { webAppRouter } from "./http/static.js";
 import { createMailer, type Mailer } from "./mail/mailer.js";
+import { createOutbox, type Outbox, type OutboxOptions } from "./outbox/outbox.js";
 import { createPeopleService } from "./people/people.service.js";
 import { peopleRouter } from "./people/people.router.js";
 import { planRoutes } from "./plans/plans.routes.js";
@@ -43,6 +44,7 @@ export interface AppDeps {
   config: AppConfig;
   logger?: Logger;
   mailer?: Mailer;
+  outbox?: OutboxOptions;
   signInLimits?: LimitSettings;
   /** Per-address limit on sign-up, reset and invitation acceptance, per 15 minutes. */
   accountLimitPerAddress?: number;
@@ -57,10 +59,11 @@ export interface AppDeps {
 const PLAN_PUT = /^\/v1\/projects\/[^/]+\/plan$/;
 
 /** Builds the Express app over a connected DataSource; `index.ts` is what listens. */
-export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close: () => Promise<void> } {
+export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; outbox: Outbox; close: () => Promise<void> } {
   const { dataSource, config } = deps;
   const logger = deps.logger ?? pino({ level: config.logLevel });
   const mailer = deps.mailer ?? createMailer(config, logger);
+  const outbox = createOutbox({ dataSource, mailer, logger, mailFrom: config.mailFrom, options: deps.outbox });
   const app = express();
   app.disable("x-powered-by");
   if (config.trustProxy) app.set("trust proxy", /^\d+$/.test(config.trustProxy) ? Number(config.trustProxy) : config.trustProxy);
@@ -105,8 +108,8 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
   if (config.env !== "production") app.use(devMailRouter(config));
 
   const sessions = createSessions(dataSource, config);
-  const auth = createAuthService(dataSource, config, mailer);
-  const people = createPeopleService(dataSource, config, mailer);
+  const auth = createAuthService(dataSource, config, outbox);
+  const people = createPeopleService(dataSource, config, outbox);
   const projects = createProjectsService(dataSource, deps.emptyPlan ?? emptyPlanDocument);
   const plans = createPlansService(dataSource, projects, deps.checkPlan ?? planDocumentCheck);
   const pool = deps.analysisPool ?? createAnalysisPool();
@@ -114,7 +117,7 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
   const analyses = createAnalysesService(dataSource, projects, catalogue, pool);
   const media = createMeasurementsModule({ dataSource, config, logger, projects, options: deps.measurements });
   const underlays = createUnderlaysModule({ dataSource, config, projects, storage: deps.measurements?.storage, options: deps.underlays });
-  const money = createMoneyModule({ dataSource, config, logger, mailer, projects, catalogue, sessions, files: media.files, options: deps.money });
+  const money = createMoneyModule({ dataSource, config, logger, outbox, projects, catalogue, sessions, files: media.files, options: deps.money });
   money.mountWebhook(beforeJson);
   const perAddress = deps.accountLimitPerAddress ?? 30;
 
@@ -140,11 +143,12 @@ export function createApp(deps: AppDeps): { app: Express; mailer: Mailer; close:
   app.use(webAppRouter(config.webDist));
   app.use(errorHandler(logger));
   const close = async () => {
+    await outbox.close();
     mailer.close();
     if (!deps.analysisPool) await pool.close();
     await media.close();
     underlays.close();
     await money.close();
   };
-  return { app, mailer, close };
+  return { app, mailer, outbox, close };
 }

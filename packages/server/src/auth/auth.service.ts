@@ -5,7 +5,8 @@ import { recordAudit } from "../audit/audit.js";
 import type { AppConfig } from "../config.js";
 import { Membership, Organization, PasswordReset, User } from "../entities/index.js";
 import { HttpError, conflict, notSignedIn } from "../http/errors.js";
-import { linkMail, type Mailer } from "../mail/mailer.js";
+import { linkMail } from "../mail/mailer.js";
+import type { Outbox } from "../outbox/outbox.js";
 import { hashPassword, verifyAgainstDummy, verifyPassword } from "./passwords.js";
 import { randomToken, tokenHash } from "./tokens.js";
 
@@ -13,7 +14,7 @@ const RESET_TTL_MS = 60 * 60 * 1000;
 const WRONG_CREDENTIALS = "That e-mail and password do not match an account. Check both, or reset your password.";
 
 /** Sign-up, sign-in, password change and reset. Sessions are issued by the router. */
-export function createAuthService(dataSource: DataSource, config: AppConfig, mailer: Mailer) {
+export function createAuthService(dataSource: DataSource, config: AppConfig, outbox: Outbox) {
   const users = dataSource.getRepository(User);
   const memberships = dataSource.getRepository(Membership);
 
@@ -46,16 +47,23 @@ export function createAuthService(dataSource: DataSource, config: AppConfig, mai
     const user = await users.findOne({ where: { email } });
     if (!user) return;
     const token = randomToken();
-    await dataSource.getRepository(PasswordReset).insert({ userId: user.id, tokenHash: tokenHash(token), expiresAt: new Date(Date.now() + RESET_TTL_MS), usedAt: null });
-    await mailer.send(
-      linkMail(
-        user.email,
-        "Reset your Hushmark password",
-        [`Hello ${user.displayName},`, "Someone (we hope you) asked to reset the password of your Hushmark account. The link works once, for one hour."],
-        { label: "Choose a new password", url: `${config.publicUrl}/reset-password/${token}` },
-        "If you did not ask for this, ignore this message: your password stays as it is.",
-      ),
-    );
+    // The reset and its mail commit together: a reset is never left without its link on the way.
+    await dataSource.transaction(async (m) => {
+      const reset = await m.getRepository(PasswordReset).save({ userId: user.id, tokenHash: tokenHash(token), expiresAt: new Date(Date.now() + RESET_TTL_MS), usedAt: null });
+      await outbox.queue(m, {
+        organizationId: null,
+        kind: "password-reset",
+        key: `password-reset:${reset.id}`,
+        ...linkMail(
+          user.email,
+          "Reset your Hushmark password",
+          [`Hello ${user.displayName},`, "Someone (we hope you) asked to reset the password of your Hushmark account. The link works once, for one hour."],
+          { label: "Choose a new password", url: `${config.publicUrl}/reset-password/${token}` },
+          "If you did not ask for this, ignore this message: your password stays as it is.",
+        ),
+      });
+    });
+    outbox.kick();
   }
 
   /** Sets a new password from a reset link; answers the user id so the router can end their sessions. */

@@ -18,6 +18,7 @@ import { Measurement } from "../measurements/measurement.entity.js";
 import { Photo } from "../measurements/photo.entity.js";
 import { moneyEntities } from "../money/entities.js";
 import { UnderlayFile } from "../underlays/underlay-file.entity.js";
+import { OutboxMail } from "../outbox/outbox-mail.entity.js";
 
 export {
   AnalysisCache, AuditEvent, FirmConstruction, Invitation, Membership, Organization, PasswordReset, Plan, PlanRevision, Project, ProjectClient, RateLimitBucket, Session, User,
@@ -26,5 +27,5 @@ export {
 /** Every entity, for the DataSource. */
 export const entities = [
   Organization, User, Membership, Project, ProjectClient, Plan, PlanRevision, AuditEvent, Session, Invitation, PasswordReset, RateLimitBucket,
-  AnalysisCache, FirmConstruction, ProjectBrief, StoredFile, Measurement, Photo, UnderlayFile, ...moneyEntities,
+  AnalysisCache, FirmConstruction, ProjectBrief, StoredFile, Measurement, Photo, UnderlayFile, OutboxMail, ...moneyEntities,
 ];

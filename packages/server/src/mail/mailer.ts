@@ -7,6 +7,8 @@ export interface OutgoingMail {
   subject: string;
   text: string;
   html?: string;
+  /** A Message-ID of our own (`<…@…>`); the outbox derives it from the mail's key so a resend is the same message. */
+  messageId?: string;
 }
 
 export interface Mailer {
@@ -24,11 +26,13 @@ export function createMailer(config: AppConfig, logger: Logger): Mailer {
     ...(config.smtp.user ? { auth: { user: config.smtp.user, pass: config.smtp.password ?? "" } } : {}),
     connectionTimeout: 5000,
     greetingTimeout: 5000,
+    // The outbox holds its row's lock while sending; a relay that stops answering must not hold it for long.
+    socketTimeout: 20_000,
   });
   return {
     async send(mail) {
       await transport.sendMail({ from: config.mailFrom, ...mail });
-      logger.info({ to: mail.to, subject: mail.subject }, "mail sent");
+      logger.info({ to: mail.to, subject: mail.subject, messageId: mail.messageId }, "mail sent");
     },
     close: () => transport.close(),
   };

@@ -8,7 +8,7 @@ import type { AppConfig } from "../config.js";
 import type { FilesService } from "../files/files.service.js";
 import type { RouteSpec } from "../http/routes.js";
 import { createJobQueue, type QueueSpec } from "../jobs/job-queue.js";
-import type { Mailer } from "../mail/mailer.js";
+import type { Outbox } from "../outbox/outbox.js";
 import { loadPaymentsConfig, type PaymentsConfig } from "../payments/payments.config.js";
 import { paymentsWebhookRouter } from "../payments/payments.router.js";
 import { createPaymentsService, createStripe } from "../payments/payments.service.js";
@@ -40,8 +40,8 @@ function searchOptions(config: AppConfig, given: SearchRegistryOptions | undefin
  * From diagnosis to paid work: price book, scenarios and option searches, proposals with their
  * PDFs (a background job), deposits through the payment service, work orders and verification.
  */
-export function createMoneyModule(deps: { dataSource: DataSource; config: AppConfig; logger: Logger; mailer: Mailer; projects: ProjectsService; catalogue: CatalogueService; sessions: Sessions; files: FilesService; options?: MoneyModuleOptions | undefined }) {
-  const { dataSource, config, logger, mailer, projects, catalogue, sessions, files } = deps;
+export function createMoneyModule(deps: { dataSource: DataSource; config: AppConfig; logger: Logger; outbox: Outbox; projects: ProjectsService; catalogue: CatalogueService; sessions: Sessions; files: FilesService; options?: MoneyModuleOptions | undefined }) {
+  const { dataSource, config, logger, outbox, projects, catalogue, sessions, files } = deps;
   const paymentsConfig = deps.options?.payments ?? loadPaymentsConfig({ ...process.env, NODE_ENV: config.env });
   const stripe = deps.options?.stripe ?? createStripe(paymentsConfig);
   const priceBook = createPriceBookService(dataSource);
@@ -51,7 +51,7 @@ export function createMoneyModule(deps: { dataSource: DataSource; config: AppCon
   let proposals: ProposalsService;
   const workOrders = createWorkOrdersService(dataSource, { projects, proposals: () => proposals, files });
   proposals = createProposalsService(dataSource, {
-    projects, scenarios, priceBook, mailer, files, catalogue, publicUrl: config.publicUrl,
+    projects, scenarios, priceBook, outbox, files, catalogue, publicUrl: config.publicUrl,
     hooks: {
       renderPdf: async (proposalId, version) => {
         await jobs.send(PROPOSAL_PDF_QUEUE, { proposalId, version });
@@ -59,7 +59,7 @@ export function createMoneyModule(deps: { dataSource: DataSource; config: AppCon
       onApproved: (m, proposal, content) => workOrders.createForApproval(m, proposal, content),
     },
   });
-  const payments = createPaymentsService(dataSource, { config: paymentsConfig, stripe, proposals, mailer, logger });
+  const payments = createPaymentsService(dataSource, { config: paymentsConfig, stripe, proposals, outbox, logger });
   const projectRoutes: RouteSpec[] = [...scenarioRoutes(scenarios), ...projectProposalRoutes(proposals), ...workOrderProjectRoutes(workOrders)];
   return {
     projectRoutes,

@@ -1,12 +1,12 @@
 import Stripe from "stripe";
 import type { Logger } from "pino";
-import type { DataSource } from "typeorm";
+import type { DataSource, EntityManager } from "typeorm";
 import { proposalContentSchema } from "@hushmark/schemas";
 import type { Actor } from "../auth/actor.js";
 import { recordAudit } from "../audit/audit.js";
 import { HttpError, conflict } from "../http/errors.js";
-import type { Mailer } from "../mail/mailer.js";
 import { linkMail } from "../mail/mailer.js";
+import type { Outbox } from "../outbox/outbox.js";
 import type { ProposalsService } from "../proposals/proposals.service.js";
 import { ProposalVersionRow } from "../proposals/proposal-version.entity.js";
 import { ProposalRow } from "../proposals/proposal.entity.js";
@@ -26,8 +26,8 @@ export function createStripe(config: PaymentsConfig): Stripe {
 }
 
 /** Deposits through Checkout Sessions and the webhook that records them (idempotent by event id). */
-export function createPaymentsService(dataSource: DataSource, deps: { config: PaymentsConfig; stripe: Stripe; proposals: ProposalsService; mailer: Mailer; logger: Logger }) {
-  const { stripe, proposals, mailer, logger } = deps;
+export function createPaymentsService(dataSource: DataSource, deps: { config: PaymentsConfig; stripe: Stripe; proposals: ProposalsService; outbox: Outbox; logger: Logger }) {
+  const { stripe, proposals, outbox, logger } = deps;
   const payments = dataSource.getRepository(PaymentRow);
 
   async function startDeposit(actor: Actor, proposalId: string, approvedVersion: number): Promise<{ url: string; paymentId: string }> {
@@ -78,23 +78,29 @@ export function createPaymentsService(dataSource: DataSource, deps: { config: Pa
     }
   }
 
-  async function receipt(payment: PaymentRow): Promise<void> {
-    const rows: { email: string; display_name: string }[] = await dataSource.query("SELECT u.email, u.display_name FROM users u WHERE u.id = $1", [payment.requestedById]);
+  /** Queues the receipt in the payment's own transaction, keyed by the payment: one receipt however often the event arrives. */
+  async function queueReceipt(m: EntityManager, payment: PaymentRow): Promise<void> {
+    const rows: { email: string; display_name: string }[] = await m.query("SELECT u.email, u.display_name FROM users u WHERE u.id = $1", [payment.requestedById]);
     const to = rows[0];
     if (!to) return;
-    const v = await dataSource.getRepository(ProposalVersionRow).findOneByOrFail({ proposalId: payment.proposalId, version: payment.version });
+    const v = await m.getRepository(ProposalVersionRow).findOneByOrFail({ proposalId: payment.proposalId, version: payment.version });
     const content = proposalContentSchema.parse(v.content);
-    await mailer.send(linkMail(to.email, `Receipt: deposit for ${content.projectTitle}`, [
-      `Hello ${to.display_name},`,
-      `We received your deposit of ${formatMoney(payment.amountMinor / 100, payment.currency)} for “${content.title}” (version ${payment.version}).`,
-      `Total of the work ${formatMoney(content.total, content.currency)}; the balance of ${formatMoney(content.total - payment.amountMinor / 100, content.currency)} is due as the terms say.`,
-      `Payment reference: ${payment.id}.`,
-    ], { label: "Open the proposal", url: proposals.portalUrl(payment.proposalId) }, `${content.firmName} — thank you.`));
+    await outbox.queue(m, {
+      organizationId: payment.organizationId,
+      kind: "receipt",
+      key: `receipt:${payment.id}`,
+      ...linkMail(to.email, `Receipt: deposit for ${content.projectTitle}`, [
+        `Hello ${to.display_name},`,
+        `We received your deposit of ${formatMoney(payment.amountMinor / 100, payment.currency)} for “${content.title}” (version ${payment.version}).`,
+        `Total of the work ${formatMoney(content.total, content.currency)}; the balance of ${formatMoney(content.total - payment.amountMinor / 100, content.currency)} is due as the terms say.`,
+        `Payment reference: ${payment.id}.`,
+      ], { label: "Open the proposal", url: proposals.portalUrl(payment.proposalId) }, `${content.firmName} — thank you.`),
+    });
   }
 
   /** Handles one verified event once: the event id is stored in the same transaction as its effect. */
   async function handle(event: Stripe.Event): Promise<{ duplicate: boolean }> {
-    let paidNow: PaymentRow | null = null;
+    let paidNow = false;
     const duplicate = await dataSource.transaction(async (m) => {
       const inserted = await m.createQueryBuilder().insert().into(PaymentEventRow).values({ eventId: event.id, type: event.type, paymentId: null }).orIgnore().execute();
       if ((inserted.raw as unknown[]).length === 0) return true;
@@ -109,7 +115,8 @@ export function createPaymentsService(dataSource: DataSource, deps: { config: Pa
           const action = moved.affected ? "payment.deposit_paid" : "payment.paid_again";
           if (!moved.affected) logger.warn({ paymentId: payment.id, proposalId: payment.proposalId }, "a deposit was paid for a proposal that was already paid");
           await recordAudit(m, { organizationId: payment.organizationId, actorUserId: null, action, entityType: "proposal", entityId: payment.proposalId, data: { paymentId: payment.id, amountMinor: payment.amountMinor, eventId: event.id } });
-          paidNow = payment;
+          await queueReceipt(m, payment);
+          paidNow = true;
         }
       } else if (event.type === "payment_intent.payment_failed") {
         const intent = event.data.object as Stripe.PaymentIntent;
@@ -122,7 +129,7 @@ export function createPaymentsService(dataSource: DataSource, deps: { config: Pa
       if (payment) await m.getRepository(PaymentEventRow).update({ eventId: event.id }, { paymentId: payment.id });
       return false;
     });
-    if (paidNow) await receipt(paidNow).catch((e: unknown) => logger.error({ err: e }, "receipt mail failed"));
+    if (paidNow) outbox.kick();
     return { duplicate };
   }
 

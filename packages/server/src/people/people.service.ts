@@ -9,7 +9,8 @@ import { recordAudit } from "../audit/audit.js";
 import type { AppConfig } from "../config.js";
 import { Invitation, Membership, Organization, User } from "../entities/index.js";
 import { HttpError, conflict, notFound } from "../http/errors.js";
-import { linkMail, type Mailer } from "../mail/mailer.js";
+import { linkMail } from "../mail/mailer.js";
+import type { Outbox } from "../outbox/outbox.js";
 
 const INVITATION_TTL_MS = 7 * 24 * 3600 * 1000;
 
@@ -33,7 +34,7 @@ function invitationDto(row: Invitation, invitedBy: string): InvitationDto {
 }
 
 /** People of a firm: members, roles and e-mailed invitations. */
-export function createPeopleService(dataSource: DataSource, config: AppConfig, mailer: Mailer) {
+export function createPeopleService(dataSource: DataSource, config: AppConfig, outbox: Outbox) {
   const invitations = dataSource.getRepository(Invitation);
   const memberships = dataSource.getRepository(Membership);
 
@@ -91,17 +92,21 @@ export function createPeopleService(dataSource: DataSource, config: AppConfig, m
         }),
       );
       await recordAudit(manager, { organizationId: actor.organizationId, actorUserId: actor.userId, action: "invitation.sent", entityType: "invitation", entityId: saved.id, data: { email: input.email, role: input.role } });
+      await outbox.queue(manager, {
+        organizationId: actor.organizationId,
+        kind: "invitation",
+        key: `invitation:${saved.id}`,
+        ...linkMail(
+          input.email,
+          `${actor.displayName} invited you to ${actor.organizationName} on Hushmark`,
+          [`Hello${input.displayName ? ` ${input.displayName}` : ""},`, `${actor.displayName} invited you to join ${actor.organizationName} on Hushmark as ${ROLE_WORDS[input.role]}.`, "The invitation is valid for seven days."],
+          { label: "Accept the invitation", url: `${config.publicUrl}/invitations/${token}` },
+          "If you did not expect this, you can ignore this message.",
+        ),
+      });
       return saved;
     });
-    await mailer.send(
-      linkMail(
-        input.email,
-        `${actor.displayName} invited you to ${actor.organizationName} on Hushmark`,
-        [`Hello${input.displayName ? ` ${input.displayName}` : ""},`, `${actor.displayName} invited you to join ${actor.organizationName} on Hushmark as ${ROLE_WORDS[input.role]}.`, "The invitation is valid for seven days."],
-        { label: "Accept the invitation", url: `${config.publicUrl}/invitations/${token}` },
-        "If you did not expect this, you can ignore this message.",
-      ),
-    );
+    outbox.kick();
     return invitationDto(row, actor.displayName);
   }
 

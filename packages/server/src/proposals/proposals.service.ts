@@ -7,7 +7,8 @@ import { HttpError, conflict, notFound } from "../http/errors.js";
 import type { CatalogueService } from "../catalogue/catalogue.service.js";
 import type { FilesService } from "../files/files.service.js";
 import { StoredFile } from "../files/stored-file.entity.js";
-import { linkMail, type Mailer } from "../mail/mailer.js";
+import { linkMail } from "../mail/mailer.js";
+import type { Outbox } from "../outbox/outbox.js";
 import type { PriceBookService } from "../price-book/price-book.service.js";
 import type { ProjectsService } from "../projects/projects.service.js";
 import { planDocumentAt } from "../scenarios/plan-at-version.js";
@@ -29,12 +30,12 @@ export interface ProposalHooks {
 const isStaff = (actor: Actor) => STAFF_ROLES.includes(actor.role);
 
 /** Proposals: versions frozen when sent, the client's comments and decision, and what the firm and the client see of them. */
-export function createProposalsService(dataSource: DataSource, deps: { projects: ProjectsService; scenarios: ScenariosService; priceBook: PriceBookService; mailer: Mailer; files: FilesService; catalogue: CatalogueService; publicUrl: string; hooks: ProposalHooks }) {
+export function createProposalsService(dataSource: DataSource, deps: { projects: ProjectsService; scenarios: ScenariosService; priceBook: PriceBookService; outbox: Outbox; files: FilesService; catalogue: CatalogueService; publicUrl: string; hooks: ProposalHooks }) {
   const proposals = dataSource.getRepository(ProposalRow);
   const versions = dataSource.getRepository(ProposalVersionRow);
   const comments = dataSource.getRepository(ProposalCommentRow);
   const payments = dataSource.getRepository(PaymentRow);
-  const { projects, scenarios, priceBook, mailer, hooks } = deps;
+  const { projects, scenarios, priceBook, outbox, hooks } = deps;
 
   const portalUrl = (id: string) => `${deps.publicUrl}/portal/proposals/${id}`;
 
@@ -160,16 +161,22 @@ export function createProposalsService(dataSource: DataSource, deps: { projects:
       await m.getRepository(ProposalVersionRow).update({ proposalId: id, version: row.currentVersion }, { sentAt: new Date(), sentById: actor.userId });
       await m.getRepository(ProposalRow).update({ id }, { status: "sent" });
       await recordAudit(m, { organizationId: actor.organizationId, actorUserId: actor.userId, action: "proposal.sent", entityType: "proposal", entityId: id, data: { version: row.currentVersion, to: project.clients.map((c) => c.email) } });
+      const content = proposalContentSchema.parse(current.content);
+      for (const client of project.clients) {
+        await outbox.queue(m, {
+          organizationId: actor.organizationId,
+          kind: "proposal-sent",
+          key: `proposal-sent:${id}:v${row.currentVersion}:${client.membershipId}`,
+          ...linkMail(client.email, `${actor.organizationName}: proposal for ${project.title}`, [
+            `Hello ${client.displayName},`,
+            `${actor.organizationName} has sent you a proposal (version ${row.currentVersion}) for ${project.title}.`,
+            content.predicted.summary,
+            `Total ${content.currency} ${content.total.toFixed(2)}, valid until ${content.validUntil}. You can read it, comment, ask for changes or approve it in your portal.`,
+          ], { label: "Open the proposal", url: portalUrl(id) }, "Predictions are estimates; the proposal explains their basis."),
+        });
+      }
     });
-    const content = proposalContentSchema.parse(current.content);
-    for (const client of project.clients) {
-      await mailer.send(linkMail(client.email, `${actor.organizationName}: proposal for ${project.title}`, [
-        `Hello ${client.displayName},`,
-        `${actor.organizationName} has sent you a proposal (version ${row.currentVersion}) for ${project.title}.`,
-        content.predicted.summary,
-        `Total ${content.currency} ${content.total.toFixed(2)}, valid until ${content.validUntil}. You can read it, comment, ask for changes or approve it in your portal.`,
-      ], { label: "Open the proposal", url: portalUrl(id) }, "Predictions are estimates; the proposal explains their basis."));
-    }
+    outbox.kick();
     return dto(await proposals.findOneByOrFail({ id }), row.currentVersion, actor);
   }
 
