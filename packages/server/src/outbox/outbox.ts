@@ -28,6 +28,8 @@ export interface OutboxOptions {
   maxDelayMs?: number;
   /** Most mails one drain pass sends before yielding to the next (default 50). */
   batch?: number;
+  /** Drain once as soon as the outbox is made (default true); tests that drive the drains turn it off. */
+  drainOnStart?: boolean;
   /** The domain in generated Message-IDs (default: the From address's domain). */
   messageIdDomain?: string;
 }
@@ -95,15 +97,18 @@ export function createOutbox(deps: { dataSource: DataSource; mailer: Mailer; log
   let running: Promise<DrainResult> | null = null;
   let again = false;
 
-  /** Claims and sends one due row; null when nothing is due (or every due row is locked by another process). */
-  async function sendOne(): Promise<keyof DrainResult | null> {
+  /** Claims and sends one due row not tried in this pass; null when nothing is due (or every due row is locked by another process). */
+  async function sendOne(tried: string[]): Promise<keyof DrainResult | null> {
     return dataSource.transaction(async (m) => {
       const rows: { id: string; kind: string; idempotency_key: string; to_address: string; subject: string; text_body: string; html_body: string | null; attempts: number }[] = await m.query(
         `SELECT id, kind, idempotency_key, to_address, subject, text_body, html_body, attempts FROM outbox_mails
-         WHERE status = 'pending' AND next_attempt_at <= now() ORDER BY next_attempt_at, created_at LIMIT 1 FOR UPDATE SKIP LOCKED`,
+         WHERE status = 'pending' AND next_attempt_at <= now() AND id <> ALL($1::uuid[]) ORDER BY next_attempt_at, created_at LIMIT 1 FOR UPDATE SKIP LOCKED`,
+        [tried],
       );
       const row = rows[0];
       if (!row) return null;
+      // A short backoff could make the row due again within this pass; one try per pass.
+      tried.push(row.id);
       const attempts = row.attempts + 1;
       try {
         await mailer.send({ to: row.to_address, subject: row.subject, text: row.text_body, ...(row.html_body ? { html: row.html_body } : {}), messageId: messageIdFor(row.idempotency_key, domain) });
@@ -130,8 +135,9 @@ export function createOutbox(deps: { dataSource: DataSource; mailer: Mailer; log
 
   async function pass(): Promise<DrainResult> {
     const result: DrainResult = { sent: 0, deferred: 0, failed: 0 };
+    const tried: string[] = [];
     for (let i = 0; i < batch && !closed; i += 1) {
-      const outcome = await sendOne();
+      const outcome = await sendOne(tried);
       if (!outcome) break;
       result[outcome] += 1;
     }
@@ -168,7 +174,7 @@ export function createOutbox(deps: { dataSource: DataSource; mailer: Mailer; log
   const timer = setInterval(kick, pollMs);
   timer.unref();
   // Mail left pending by a process that died goes out as soon as this one is up.
-  setImmediate(kick);
+  if (o.drainOnStart !== false) setImmediate(kick);
 
   return {
     queue: queueMail,
