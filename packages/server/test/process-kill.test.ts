@@ -1,10 +1,13 @@
 import "reflect-metadata";
+import { createServer, type Socket } from "node:net";
+import type { AddressInfo } from "node:net";
 import PgBoss from "pg-boss";
 import supertest from "supertest";
 import type { DataSource } from "typeorm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { startMailFake, startPaymentsFake, startS3Fake, type MailFake, type PaymentsFake, type S3Fake } from "@hushmark/fakes";
 import { createDataSource } from "../src/data-source.js";
+import { messageIdFor } from "../src/outbox/outbox.js";
 import { PASSWORD, uniqueEmail, type Harness } from "./harness.js";
 import { demoPlan, pricedProject, SETUP, until } from "./money-harness.js";
 import { freePort, person, startServerProcess, type ServerProcess } from "./support/server-process.js";
@@ -14,7 +17,7 @@ const JOBS_SCHEMA = `pgboss_kill_${process.pid}`;
 /**
  * The server process killed outright (SIGKILL: no shutdown hook runs) in the middle of saves and of
  * a background job; a new process on the same port takes over. Saves are whole or absent, and the
- * job's effect happens once.
+ * job's effect happens once, its e-mail included.
  */
 describe("server process killed", () => {
   let mail: MailFake;
@@ -202,9 +205,60 @@ describe("server process killed", () => {
     expect(after.payments.filter((x: { status: string }) => x.status === "paid")).toHaveLength(1);
     const events: { n: string }[] = await dataSource.query("SELECT count(*) AS n FROM payment_events WHERE event_id = $1", [completed.id]);
     expect(Number(events[0]!.n)).toBe(1);
-    // The receipt is mailed after the payment's transaction, not from an outbox: a kill between the
-    // two loses it (docs/operations.md), so this only checks it is never sent twice.
-    const receipts = mail.messages().filter((m) => m.subject.startsWith("Receipt") && m.to.includes(p.client.email));
-    expect(receipts.length).toBeLessThanOrEqual(1);
+    // The receipt is queued in the payment's transaction, so it goes out whichever moment the kill
+    // hit. A kill between the relay's accept and the outbox's update would send it twice, with one
+    // Message-ID (the reader's mail program shows it once): count messages by that id.
+    const paymentId = start.body.paymentId as string;
+    const receipts = () => mail.messages().filter((m) => m.subject.startsWith("Receipt") && m.to.includes(p.client.email));
+    await until("the receipt", async () => (receipts().length > 0 ? true : undefined), 20_000);
+    await new Promise((r) => setTimeout(r, 500));
+    console.info(`[process-kill] receipt messages in the mail fake: ${receipts().length}`);
+    expect([...new Set(receipts().map((m) => m.messageId))]).toEqual([messageIdFor(`receipt:${paymentId}`, "hushmark.local")]);
+    const queued: { status: string }[] = await dataSource.query("SELECT status FROM outbox_mails WHERE idempotency_key = $1", [`receipt:${paymentId}`]);
+    expect(queued).toEqual([{ status: "sent" }]);
+  }, 90_000);
+
+  it("mails a sent proposal exactly once when the process dies after the commit, before the mail went out", async () => {
+    const h: Harness = { dataSource, mail, request: () => supertest.agent(server!.base), close: async () => undefined };
+    const p = await pricedProject(h);
+    const scenario = await p.planner.post(`/api/v1/projects/${p.projectId}/scenarios`).send({ name: "Door", setup: SETUP(p.planVersion), items: [{ priceBookItemId: p.byCode("door-bottom-auto").id, elementId: "door-studio" }] });
+    const proposalId = (await p.planner.post(`/api/v1/projects/${p.projectId}/proposals`).send({ scenarioId: scenario.body.id })).body.id as string;
+
+    // A relay that takes the connection and never answers: the send is in flight when the kill lands.
+    const held: Socket[] = [];
+    const relay = createServer((socket) => {
+      held.push(socket);
+      socket.on("error", () => undefined);
+    });
+    await new Promise<void>((r) => relay.listen(0, "127.0.0.1", () => r()));
+    const smtpPort = env.HUSHMARK_SMTP_PORT!;
+    try {
+      await server!.kill("SIGTERM");
+      env = { ...env, HUSHMARK_SMTP_PORT: String((relay.address() as AddressInfo).port) };
+      await restart();
+      const sent = await p.planner.post(`/api/v1/proposals/${proposalId}/send`).send({});
+      expect(sent.status, JSON.stringify(sent.body).slice(0, 300)).toBe(200);
+      await until("the send reaching the relay", async () => (held.length > 0 ? true : undefined), 5000);
+      expect(await server!.kill("SIGKILL")).toBe("SIGKILL");
+    } finally {
+      env = { ...env, HUSHMARK_SMTP_PORT: smtpPort };
+      for (const s of held) s.destroy();
+      await new Promise<void>((r) => relay.close(() => r()));
+    }
+    const key = `proposal-sent:${proposalId}:v1:${p.client.membershipId}`;
+    const [pending] = await dataSource.query("SELECT status, attempts FROM outbox_mails WHERE idempotency_key = $1", [key]);
+    // The killed send's transaction died with its connection: the row is as it was queued.
+    expect(pending).toEqual({ status: "pending", attempts: 0 });
+    expect(mail.messages().filter((m) => m.to.includes(p.client.email) && m.subject.includes("proposal"))).toHaveLength(0);
+
+    await restart();
+    const proposalMails = () => mail.messages().filter((m) => m.to.includes(p.client.email) && m.subject.includes("proposal"));
+    await until("the proposal mail from the new process", async () => (proposalMails().length > 0 ? true : undefined), 20_000);
+    await new Promise((r) => setTimeout(r, 500));
+    expect(proposalMails()).toHaveLength(1);
+    expect(proposalMails()[0]!.messageId).toBe(messageIdFor(key, "hushmark.local"));
+    expect(proposalMails()[0]!.links.some((l) => l.endsWith(`/portal/proposals/${proposalId}`))).toBe(true);
+    const [done] = await dataSource.query("SELECT status, attempts FROM outbox_mails WHERE idempotency_key = $1", [key]);
+    expect(done).toEqual({ status: "sent", attempts: 1 });
   }, 90_000);
 });
