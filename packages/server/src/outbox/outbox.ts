@@ -21,7 +21,7 @@ export const SENT_SECRET_BODY = "(Removed after sending: this message held a one
 export interface OutboxOptions {
   /** How often each process looks for due mail besides the kick after a commit (default 5 s). */
   pollMs?: number;
-  /** Tries before a mail is marked failed (default 8, about 40 minutes of backoff at the defaults). */
+  /** Tries before a mail is marked failed (default 8: about 21 minutes of backoff at the defaults). */
   maxAttempts?: number;
   /** Wait after the first failure; doubled for each further one, capped at `maxDelayMs` (default 10 s). */
   baseDelayMs?: number;
