@@ -34,6 +34,10 @@ export interface PlanCanvasProps {
   pinReadings?: ReadonlyMap<string, string>;
   /** Labels for the overlay, in screen pixels for the view it is drawn at. */
   overlayLabels?: (drawnView: Viewport) => ReactNode;
+  /** A read-only view: room names come before the text of pins and notes (see LabelsGroup). */
+  roomNamesFirst?: boolean;
+  /** Plan points the overlay labels draw markers on, kept clear of names (memoise the array). */
+  keepClear?: readonly { x: number; y: number }[];
   onKeyDown?: (e: React.KeyboardEvent<HTMLDivElement>) => void;
   label: string;
   cursor?: string;
@@ -134,7 +138,7 @@ export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function
           <Group x={d.ox} y={d.oy} scaleX={d.scale} scaleY={-d.scale}>{overlay}</Group>
           {/* Names stay above the analysis colours so they can always be read. */}
           <Group x={d.ox} y={d.oy}>
-            {painted ? <LabelsGroup plan={drawnPlan} levelId={levelId} scale={d.scale} unit={plan.displayUnit} exclude={moving} width={width} height={height} ox={d.ox} oy={d.oy} {...(pinReadings ? { pinReadings } : {})} /> : null}
+            {painted ? <LabelsGroup plan={drawnPlan} levelId={levelId} scale={d.scale} unit={plan.displayUnit} exclude={moving} width={width} height={height} ox={d.ox} oy={d.oy} roomNamesFirst={props.roomNamesFirst ?? false} {...(pinReadings ? { pinReadings } : {})} {...(props.keepClear ? { keepClear: props.keepClear } : {})} /> : null}
           </Group>
           {overlayLabels?.(d)}
         </Layer>

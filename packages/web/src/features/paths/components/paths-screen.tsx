@@ -139,6 +139,7 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
               tool={tool}
               label={`Marked-up plan of ${title}: elements coloured by their share of the sound reaching ${result?.receiver.name ?? "the room"}. The list beside it gives the same information.`}
               cursor="grab"
+              roomNamesFirst
               overlay={result ? <ShareOverlay plan={plan} levelId={levelId} elements={result.elements} scale={viewport.scale} dimmed={stale} /> : null}
               overlayLabels={result ? (drawnView) => <PathLines result={result} levelId={levelId} v={drawnView} dimmed={stale} highlight={highlight} /> : undefined}
             />

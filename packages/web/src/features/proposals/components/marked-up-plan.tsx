@@ -67,6 +67,7 @@ export function MarkedUpPlan({ plan, shares, levelId: startLevel, markers, label
   }, [picked, store]);
 
   const anchors = useMemo(() => (markers ?? []).map((id, i) => ({ n: i + 1, at: elementAnchor(plan, id) })), [markers, plan]);
+  const markerPoints = useMemo(() => anchors.flatMap(({ at }) => (at && (at.levelId === null || at.levelId === levelId) ? [{ x: at.x, y: at.y }] : [])), [anchors, levelId]);
   const overlay = shares ? <ShareOverlay plan={plan} levelId={levelId} elements={shares as AnalysisResult["elements"]} scale={viewport.scale} dimmed={false} /> : null;
   const labels = anchors.length
     ? (v: Viewport) => (
@@ -114,6 +115,8 @@ export function MarkedUpPlan({ plan, shares, levelId: startLevel, markers, label
           cursor={onPick ? "pointer" : "grab"}
           overlay={overlay}
           overlayLabels={labels}
+          roomNamesFirst
+          keepClear={markerPoints}
         />
       </div>
       {shares ? (
