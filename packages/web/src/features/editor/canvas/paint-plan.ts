@@ -13,7 +13,12 @@ export interface PaintSpec {
   /** Paint only these (and what hangs on them), with room outlines standing in for wall pieces. */
   only?: ReadonlySet<string>;
   ghost?: boolean;
+  /** A traced drawing shows under this level: rooms are filled faintly so it stays readable. */
+  overUnderlay?: boolean;
 }
+
+/** How much of a room's fill covers a visible underlay: enough to tell the kinds of room apart, little enough to read the drawing through. */
+export const UNDERLAY_FILL_ALPHA = 0.3;
 
 const hostOwner = (o: Opening) => edgeRefParts(o.wallRef)?.roomId ?? o.wallRef;
 
@@ -112,11 +117,14 @@ export function paintPlan(ctx: CanvasRenderingContext2D, spec: PaintSpec): void 
     ctx.globalAlpha = 1;
     return;
   }
+  // One alpha for every fill: no extra pass or per-room state on a plan of thousands of rooms.
+  if (spec.overUnderlay) ctx.globalAlpha = UNDERLAY_FILL_ALPHA;
   for (const r of elementsOfType(plan, "room")) {
     if (r.levelId !== levelId || !keep(r.id) || r.outline.length < 3) continue;
     ctx.fillStyle = roomFill(r.use);
     ctx.beginPath(); polygon(ctx, r.outline); ctx.fill();
   }
+  ctx.globalAlpha = 1;
   for (const v of elementsOfType(plan, "void")) {
     if (v.levelId !== levelId || !keep(v.id) || v.outline.length < 3) continue;
     const xs = v.outline.map((p) => p.x), ys = v.outline.map((p) => p.y);

@@ -91,6 +91,8 @@ export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function
   }
   const moving = movingRef.current.ids;
   const drawnPlan = basePlan && moving.size ? basePlan : plan;
+  // Only where an underlay is actually drawn (the Sketch passes its images) do rooms let it show through.
+  const overUnderlay = props.underlaySrc !== undefined && (plan.underlays ?? []).some((u) => u.levelId === levelId && u.visible);
   useImperativeHandle(ref, () => ({ stage: () => stageRef.current }), []);
   const gestures = usePointerGestures({ viewport: v, setViewport, tool, onToolEvent: () => setTick((t) => t + 1) });
 
@@ -131,7 +133,7 @@ export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function
         <Layer ref={elementsRef} listening={false}>
           <Group x={d.ox} y={d.oy} scaleX={d.scale} scaleY={-d.scale}>
             {ghostLevelId ? <ElementsGroup plan={drawnPlan} levelId={ghostLevelId} scale={d.scale} ghost /> : null}
-            <ElementsGroup plan={drawnPlan} levelId={levelId} exclude={moving} scale={d.scale} />
+            <ElementsGroup plan={drawnPlan} levelId={levelId} exclude={moving} scale={d.scale} overUnderlay={overUnderlay} />
           </Group>
         </Layer>
         <Layer ref={overlayRef} listening={false}>
@@ -144,7 +146,7 @@ export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function
         </Layer>
         <Layer listening={false}>
           <Group x={v.ox} y={v.oy} scaleX={v.scale} scaleY={-v.scale}>
-            <MovingGroup plan={plan} levelId={levelId} ids={moving} scale={v.scale} />
+            <MovingGroup plan={plan} levelId={levelId} ids={moving} scale={v.scale} overUnderlay={overUnderlay} />
           </Group>
           {moving.size ? (
             <Group x={v.ox} y={v.oy}>
