@@ -111,7 +111,9 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
   if (!inputs) return <p className="rounded-lg border border-rule bg-panel p-6 text-[15px]">Draw at least two rooms in Sketch to see where the sound gets through.</p>;
 
   return (
-    <div ref={frame.ref} className="flex flex-col overflow-hidden rounded-lg border border-rule bg-panel" style={{ height: frame.height }}>
+    // On a phone the inputs, the drawing and the results stack and the page scrolls: squeezed
+    // into one window's height the drawing would be a strip. From tablet width up it fills the window.
+    <div ref={frame.ref} className="flex flex-col overflow-hidden rounded-lg border border-rule bg-panel md:h-[var(--frame-h)]" style={{ "--frame-h": `${frame.height}px` } as React.CSSProperties}>
       <div className="border-b border-rule p-2">
         <AnalysisInputs plan={plan} inputs={inputs} onChange={setInputs} plain={plain} />
       </div>
@@ -126,7 +128,7 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
             {recomputing ? <span role="status" className="inline-flex items-center gap-1.5 text-[13px] font-medium text-caution" data-testid="recomputing"><span className="h-2 w-2 animate-pulse rounded-full bg-caution" aria-hidden="true" /> Recomputing…</span> : null}
             <div className="ml-auto"><ExportMenu plan={plan} levelId={levelId} title={title} {...(markup ? { markup } : {})} /></div>
           </div>
-          <div ref={canvas.ref} className="relative min-h-0 flex-1">
+          <div ref={canvas.ref} className="relative h-[360px] flex-none md:h-auto md:min-h-0 md:flex-1">
             <PlanCanvas
               plan={plan}
               levelId={levelId}
@@ -151,7 +153,7 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
             </ul>
           </div>
         </div>
-        <aside aria-label="Results" className="flex h-[40%] min-h-0 shrink-0 flex-col gap-4 overflow-y-auto border-t border-rule p-3 lg:h-auto lg:w-[360px] lg:border-l lg:border-t-0">
+        <aside aria-label="Results" className="flex min-h-0 shrink-0 flex-col gap-4 border-t border-rule p-3 md:h-[40%] md:overflow-y-auto lg:h-auto lg:w-[360px] lg:border-l lg:border-t-0">
           {analysis.isPending && !result ? <p role="status" className="text-sm text-muted">Working out where the sound gets through…</p> : null}
           {problems ? (
             <div role="alert" className="rounded-md border border-danger/40 bg-danger/5 p-3 text-sm">
