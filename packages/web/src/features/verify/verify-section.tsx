@@ -2,6 +2,7 @@ import { useState } from "react";
 import { Badge } from "../../components/ui/badge";
 import { Button } from "../../components/ui/button";
 import { Card, CardHeader } from "../../components/ui/card";
+import { EmptyState } from "../../components/ui/empty-state";
 import { ErrorState } from "../../components/ui/error-state";
 import { PageLoading } from "../../components/ui/spinner";
 import { isApiError } from "../../lib/api-client";
@@ -30,7 +31,15 @@ export default function VerifySection({ projectId }: { projectId: string }) {
   const ready = (proposals.data?.proposals ?? []).filter((p) => ["deposit_paid", "in_progress", "verified"].includes(p.status));
   return (
     <div className="flex flex-col gap-5">
-      {list.data.verifications.length === 0 ? <p className="text-sm text-muted">No after-work measurement yet.</p> : null}
+      {list.data.verifications.length === 0 ? (
+        <EmptyState title="No after-work measurement yet">
+          {!canRecord
+            ? "The comparison of before and after appears here once the work is done and measured."
+            : ready.length
+              ? "Record it below: the band levels in the quiet room before and after the work."
+              : "It can be recorded once a proposal's deposit is paid."}
+        </EmptyState>
+      ) : null}
       {list.data.verifications.map((v) => (
         <Card key={v.id}>
           <CardHeader title={`Measured ${formatDateTime(v.createdAt)}`} actions={v.target ? <Badge tone={v.target.met ? "good" : "caution"}>{v.target.met ? "Target met" : "Target not met yet"}</Badge> : null} />
@@ -47,7 +56,7 @@ export default function VerifySection({ projectId }: { projectId: string }) {
           </div>
         </Card>
       ))}
-      {canRecord ? <RecordForm projectId={projectId} proposals={ready} /> : null}
+      {canRecord && (ready.length || list.data.verifications.length) ? <RecordForm projectId={projectId} proposals={ready} /> : null}
     </div>
   );
 }
