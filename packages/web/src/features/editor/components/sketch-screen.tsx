@@ -45,7 +45,9 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
   const [side, setSide] = useState<SideTab>("details");
   const [viewport, setViewport] = useState<Viewport>({ scale: 50, ox: 200, oy: 400 });
   const [conflictOpen, setConflictOpen] = useState(true);
-  const frame = useFillHeight<HTMLDivElement>();
+  // On a phone the editor takes the whole window below the top bar (the project's title scrolls
+  // away) rather than the strip left under the title, where the plan would be a few rows high.
+  const frame = useFillHeight<HTMLDivElement>(narrow ? Math.max(480, window.innerHeight - 72) : 480);
   const canvas = useElementSize<HTMLDivElement>(frame.height);
   const canvasRef = useRef<PlanCanvasHandle>(null);
   const clipboard = useRef<Clip | null>(null);
@@ -92,9 +94,9 @@ export function SketchScreen({ projectId, response, title, readOnly }: { project
 
   return (
     <div ref={frame.ref} className="flex flex-col overflow-hidden rounded-lg border border-rule bg-panel" style={{ height: frame.height }}>
-      <div className="flex flex-wrap items-center gap-2 border-b border-rule px-2 py-1">
+      <div className="flex flex-wrap items-center gap-1 border-b border-rule px-2 py-1 sm:gap-2">
         <LevelBar plan={plan} levelId={levelId} onLevel={setLevelId} store={store} readOnly={readOnly} />
-        <span className="mx-1 h-6 w-px bg-rule" aria-hidden="true" />
+        <span className="mx-1 hidden h-6 w-px bg-rule sm:block" aria-hidden="true" />
         {!readOnly ? (
           <>
             <button type="button" className="min-h-10 rounded-md px-2 text-[14px] hover:bg-ink/5 disabled:opacity-40" disabled={!history.undo} onClick={() => store.undo()} aria-keyshortcuts="Control+Z" title={history.undo ? `Undo ${history.undo}` : "Nothing to undo"}>Undo</button>
