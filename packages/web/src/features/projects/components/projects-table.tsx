@@ -68,6 +68,13 @@ const columns = [
   }),
 ];
 
+/** Columns left out where the table would not fit: clients below desktop width, the site on a phone (the project page shows it). */
+function hiddenBelow(columnId: string): string {
+  if (columnId === "clients") return "hidden lg:table-cell";
+  if (columnId === "siteAddress") return "hidden sm:table-cell";
+  return "";
+}
+
 const sortLabels: Record<string, string> = { title: "title", status: "status", updatedAt: "last update" };
 
 const statusFilterOptions = [{ value: "", label: "All statuses" }, ...projectStatusSchema.options.map((status) => ({ value: status, label: statusLabels[status] }))];
@@ -115,13 +122,13 @@ export function ProjectsTable({ projects, showClients = true }: { projects: Proj
                 <tr key={group.id} className="border-b border-rule">
                   {group.headers.map((header) => {
                     const sorted = header.column.getIsSorted();
-                    const hideOnTablet = header.column.id === "clients" ? "hidden lg:table-cell" : "";
+                    const hideOnTablet = hiddenBelow(header.column.id);
                     return (
                       <th
                         key={header.id}
                         scope="col"
                         aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
-                        className={`px-4 py-2 text-sm font-semibold text-muted ${hideOnTablet}`}
+                        className={`px-3 py-2 text-sm font-semibold text-muted sm:px-4 ${hideOnTablet}`}
                       >
                         {header.column.getCanSort() ? (
                           <button
@@ -148,7 +155,7 @@ export function ProjectsTable({ projects, showClients = true }: { projects: Proj
               {rows.map((row) => (
                 <tr key={row.id} className="border-b border-rule last:border-b-0 hover:bg-paper/60">
                   {row.getVisibleCells().map((cell) => (
-                    <td key={cell.id} className={`px-4 py-3 align-middle ${cell.column.id === "clients" ? "hidden lg:table-cell" : ""}`}>
+                    <td key={cell.id} className={`px-3 py-3 align-middle sm:px-4 ${hiddenBelow(cell.column.id)}`}>
                       {flexRender(cell.column.columnDef.cell, cell.getContext())}
                     </td>
                   ))}
