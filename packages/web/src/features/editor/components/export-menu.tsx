@@ -17,14 +17,14 @@ export function ExportMenu({ plan, levelId, title, markup, onCommand, projectId 
   const name = `${fileSafe(title)}${markup ? "-sound-paths" : "-plan"}`;
   return (
     <div className="relative">
-      <button type="button" aria-expanded={open} onClick={() => setOpen((o) => !o)} className="min-h-9 rounded-md px-2 text-[14px] font-medium hover:bg-ink/5">Export</button>
+      <button type="button" aria-expanded={open} onClick={() => setOpen((o) => !o)} className="min-h-10 rounded-md px-2 text-[14px] font-medium hover:bg-ink/5">Export</button>
       {open ? (
-        <div className="absolute right-0 top-10 z-20 flex w-56 flex-col gap-1 rounded-md border border-rule bg-panel p-2 shadow-lg">
+        <div className="absolute right-0 top-11 z-20 flex w-72 max-w-[calc(100vw-2.5rem)] flex-col gap-0.5 rounded-md border border-rule bg-panel p-2 shadow-lg">
           <label className="flex min-h-9 items-center gap-2 px-1 text-[14px]"><input type="checkbox" checked={north} onChange={(e) => setNorth(e.target.checked)} className="h-4 w-4 accent-brand" /> North arrow</label>
-          <button type="button" className="min-h-11 rounded px-2 text-left text-[14px] hover:bg-brand-soft" onClick={async () => {
+          <button type="button" className="min-h-11 rounded px-2 py-1.5 text-left text-[14px] hover:bg-brand-soft" onClick={async () => {
             try { const s = make(); downloadBlob(await svgToPng(s.svg, s.width, s.height, 3), `${name}.png`); setOpen(false); } catch (e) { setError((e as Error).message); }
           }}>Image (PNG, print resolution)</button>
-          <button type="button" className="min-h-11 rounded px-2 text-left text-[14px] hover:bg-brand-soft" onClick={() => { const s = make(); downloadBlob(new Blob([s.svg], { type: "image/svg+xml" }), `${name}.svg`); setOpen(false); }}>Drawing (SVG)</button>
+          <button type="button" className="min-h-11 rounded px-2 py-1.5 text-left text-[14px] hover:bg-brand-soft" onClick={() => { const s = make(); downloadBlob(new Blob([s.svg], { type: "image/svg+xml" }), `${name}.svg`); setOpen(false); }}>Drawing (SVG)</button>
           {markup ? null : <ExchangeMenuItems plan={plan} levelId={levelId} title={title} onDone={() => setOpen(false)} {...(onCommand ? { onCommand } : {})} {...(projectId ? { projectId } : {})} />}
           {error ? <p role="alert" className="px-1 text-sm text-danger">{error}</p> : null}
         </div>

@@ -9,7 +9,7 @@ import { dxfFile, geoJsonFile, planDocumentFile, scheduleFile } from "../model/e
 import { DxfImportDialog } from "./dxf-import-dialog";
 import { IfcImportDialog } from "./ifc-import-dialog";
 
-const item = "min-h-11 rounded px-2 text-left text-[14px] hover:bg-brand-soft";
+const item = "min-h-11 rounded px-2 py-1.5 text-left text-[14px] hover:bg-brand-soft";
 
 type Props = { plan: Plan; levelId: string; title: string; onCommand?: (cmd: Command) => void; onDone?: () => void };
 
