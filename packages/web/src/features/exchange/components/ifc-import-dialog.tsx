@@ -89,8 +89,13 @@ export function IfcImportDialog({ open, onClose, plan, onCommand, runner: given 
       {step.kind === "pick" || step.kind === "reading" ? (
         <label className="flex flex-col gap-1 text-sm font-medium">
           Model file (.ifc)
-          <input type="file" accept=".ifc,application/x-step" disabled={step.kind === "reading"} onChange={(e) => void pick(e.target.files?.[0])} className="text-sm" />
+          <input type="file" accept=".ifc,application/x-step" disabled={step.kind === "reading"} onChange={(e) => void pick(e.target.files?.[0])} className="text-sm text-muted file:mr-3 file:min-h-11 file:cursor-pointer file:rounded-md file:border file:border-rule file:bg-panel file:px-4 file:text-sm file:font-medium file:text-ink hover:file:border-muted" />
         </label>
+      ) : null}
+      {step.kind === "pick" ? (
+        <div className="flex justify-end">
+          <Button variant="secondary" onClick={close}>Cancel</Button>
+        </div>
       ) : null}
       {step.kind === "reading" ? (
         <div className="flex flex-col gap-1 text-sm">
