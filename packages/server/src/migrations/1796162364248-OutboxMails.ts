@@ -9,9 +9,10 @@ export class OutboxMails1796162364248 implements MigrationInterface {
         await queryRunner.query(`CREATE INDEX "ix_outbox_mails_due" ON "outbox_mails"  ("status", "next_attempt_at") `);
     }
 
+    // Unqualified names: the migration check undoes this in a schema of its own and must leave public alone.
     public async down(queryRunner: QueryRunner): Promise<void> {
-        await queryRunner.query(`DROP INDEX "public"."ix_outbox_mails_due"`);
-        await queryRunner.query(`DROP INDEX "public"."ux_outbox_mails_key"`);
+        await queryRunner.query(`DROP INDEX "ix_outbox_mails_due"`);
+        await queryRunner.query(`DROP INDEX "ux_outbox_mails_key"`);
         await queryRunner.query(`DROP TABLE "outbox_mails"`);
     }
 
