@@ -32,12 +32,16 @@ describe("migrations", () => {
     expect(pending.upQueries.map((q) => q.query)).toEqual([]);
   });
 
-  it("undo cleanly, every one of them", async () => {
+  it("undo cleanly, every one of them, touching nothing outside their own schema", async () => {
+    const publicIndexes = () => dataSource.query("SELECT indexname FROM pg_indexes WHERE schemaname = 'public' ORDER BY indexname");
+    const before = await publicIndexes();
     for (let i = 0; i < dataSource.migrations.length; i += 1) await dataSource.undoLastMigration({ transaction: "each" });
     const tables: { table_name: string }[] = await dataSource.query(
       "SELECT table_name FROM information_schema.tables WHERE table_schema = $1 AND table_name <> 'typeorm_migrations'",
       [SCHEMA],
     );
     expect(tables).toEqual([]);
+    // A `down` naming "public" explicitly would drop the shared test schema's indexes (or production's).
+    expect(await publicIndexes()).toEqual(before);
   });
 });

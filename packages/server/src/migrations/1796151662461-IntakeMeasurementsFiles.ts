@@ -33,14 +33,14 @@ export class IntakeMeasurementsFiles1796151662461 implements MigrationInterface 
         await queryRunner.query(`ALTER TABLE "measurements" DROP CONSTRAINT "FK_b71e8e8eaf8c36fe607818e7649"`);
         await queryRunner.query(`ALTER TABLE "stored_files" DROP CONSTRAINT "FK_a27e4c9803c954e917700d3d9e6"`);
         await queryRunner.query(`ALTER TABLE "project_briefs" DROP CONSTRAINT "FK_a9c5f893cd3d8dd0b85b18b63aa"`);
-        await queryRunner.query(`DROP INDEX "public"."ix_photos_project"`);
-        await queryRunner.query(`DROP INDEX "public"."ix_photos_org"`);
+        await queryRunner.query(`DROP INDEX "ix_photos_project"`);
+        await queryRunner.query(`DROP INDEX "ix_photos_org"`);
         await queryRunner.query(`DROP TABLE "photos"`);
-        await queryRunner.query(`DROP INDEX "public"."ix_measurements_project"`);
-        await queryRunner.query(`DROP INDEX "public"."ix_measurements_org"`);
+        await queryRunner.query(`DROP INDEX "ix_measurements_project"`);
+        await queryRunner.query(`DROP INDEX "ix_measurements_org"`);
         await queryRunner.query(`DROP TABLE "measurements"`);
-        await queryRunner.query(`DROP INDEX "public"."ix_stored_files_project"`);
-        await queryRunner.query(`DROP INDEX "public"."ix_stored_files_org"`);
+        await queryRunner.query(`DROP INDEX "ix_stored_files_project"`);
+        await queryRunner.query(`DROP INDEX "ix_stored_files_org"`);
         await queryRunner.query(`DROP TABLE "stored_files"`);
         await queryRunner.query(`DROP TABLE "project_briefs"`);
     }

@@ -47,25 +47,25 @@ export class ProposalsAndPayments1796152691589 implements MigrationInterface {
         await queryRunner.query(`ALTER TABLE "firm_settings" DROP CONSTRAINT "FK_149a5aecf5efdc4f67443987ff9"`);
         await queryRunner.query(`ALTER TABLE "payments" DROP CONSTRAINT "FK_625451722d0d05ccdc0d66cbfb1"`);
         await queryRunner.query(`ALTER TABLE "proposals" DROP CONSTRAINT "FK_abf14bbfaf1a03909314317b4a4"`);
-        await queryRunner.query(`DROP INDEX "public"."ix_work_order_tasks_order"`);
+        await queryRunner.query(`DROP INDEX "ix_work_order_tasks_order"`);
         await queryRunner.query(`DROP TABLE "work_order_tasks"`);
-        await queryRunner.query(`DROP INDEX "public"."ix_work_orders_project"`);
+        await queryRunner.query(`DROP INDEX "ix_work_orders_project"`);
         await queryRunner.query(`DROP TABLE "work_orders"`);
-        await queryRunner.query(`DROP INDEX "public"."ix_verifications_proposal"`);
+        await queryRunner.query(`DROP INDEX "ix_verifications_proposal"`);
         await queryRunner.query(`DROP TABLE "verifications"`);
-        await queryRunner.query(`DROP INDEX "public"."ix_scenarios_project"`);
+        await queryRunner.query(`DROP INDEX "ix_scenarios_project"`);
         await queryRunner.query(`DROP TABLE "scenarios"`);
         await queryRunner.query(`DROP TABLE "proposal_versions"`);
-        await queryRunner.query(`DROP INDEX "public"."ix_proposal_comments_proposal"`);
+        await queryRunner.query(`DROP INDEX "ix_proposal_comments_proposal"`);
         await queryRunner.query(`DROP TABLE "proposal_comments"`);
-        await queryRunner.query(`DROP INDEX "public"."ux_price_book_items_code"`);
+        await queryRunner.query(`DROP INDEX "ux_price_book_items_code"`);
         await queryRunner.query(`DROP TABLE "price_book_items"`);
         await queryRunner.query(`DROP TABLE "firm_settings"`);
         await queryRunner.query(`DROP TABLE "payment_events"`);
-        await queryRunner.query(`DROP INDEX "public"."ix_payments_proposal"`);
-        await queryRunner.query(`DROP INDEX "public"."ux_payments_checkout_session"`);
+        await queryRunner.query(`DROP INDEX "ix_payments_proposal"`);
+        await queryRunner.query(`DROP INDEX "ux_payments_checkout_session"`);
         await queryRunner.query(`DROP TABLE "payments"`);
-        await queryRunner.query(`DROP INDEX "public"."ix_proposals_project"`);
+        await queryRunner.query(`DROP INDEX "ix_proposals_project"`);
         await queryRunner.query(`DROP TABLE "proposals"`);
     }
 

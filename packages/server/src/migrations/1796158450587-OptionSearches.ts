@@ -11,7 +11,7 @@ export class OptionSearches1796158450587 implements MigrationInterface {
 
     public async down(queryRunner: QueryRunner): Promise<void> {
         await queryRunner.query(`ALTER TABLE "option_searches" DROP CONSTRAINT "FK_101df1ad7ecdccb8e7a0476d907"`);
-        await queryRunner.query(`DROP INDEX "public"."ix_option_searches_project"`);
+        await queryRunner.query(`DROP INDEX "ix_option_searches_project"`);
         await queryRunner.query(`DROP TABLE "option_searches"`);
     }
 

@@ -14,8 +14,8 @@ export class UnderlayFiles1796158669431 implements MigrationInterface {
     public async down(queryRunner: QueryRunner): Promise<void> {
         await queryRunner.query(`ALTER TABLE "underlay_files" DROP CONSTRAINT "FK_166ae9db8972527957d69205a9e"`);
         await queryRunner.query(`ALTER TABLE "underlay_files" DROP CONSTRAINT "FK_62c9d5e4d0b794b0f2bf66c14b6"`);
-        await queryRunner.query(`DROP INDEX "public"."ix_underlay_files_project"`);
-        await queryRunner.query(`DROP INDEX "public"."ix_underlay_files_org"`);
+        await queryRunner.query(`DROP INDEX "ix_underlay_files_project"`);
+        await queryRunner.query(`DROP INDEX "ix_underlay_files_org"`);
         await queryRunner.query(`DROP TABLE "underlay_files"`);
     }
 
