@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { startMailFake, type MailFake } from "@hushmark/fakes";
 import { DEMO_PRICE_BOOK } from "../src/price-book/demo-price-book.js";
 import { PASSWORD, uniqueEmail } from "./harness.js";
+import { clearRateLimits } from "./support/server-process.js";
 
 const serverDir = fileURLToPath(new URL("..", import.meta.url));
 const demoPlan = JSON.parse(readFileSync(new URL("../../../examples/fernhollow-studio.plan.json", import.meta.url), "utf8")) as Record<string, unknown>;
@@ -51,6 +52,7 @@ describe("option searches across two server processes", () => {
   let body: Record<string, unknown> = {};
 
   beforeAll(async () => {
+    await clearRateLimits();
     mail = await startMailFake();
     for (let i = 0; i < 2; i += 1) {
       const port = await freePort();

@@ -4,6 +4,7 @@ import { fileURLToPath } from "node:url";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { startMailFake, type MailFake } from "@hushmark/fakes";
 import { PASSWORD, uniqueEmail } from "./harness.js";
+import { clearRateLimits } from "./support/server-process.js";
 
 const serverDir = fileURLToPath(new URL("..", import.meta.url));
 // Every editor retries until its save is in, so the requests grow with the square of this; the
@@ -51,6 +52,7 @@ describe("two server processes against one database", () => {
   let mail: MailFake;
 
   beforeAll(async () => {
+    await clearRateLimits();
     mail = await startMailFake();
     for (let i = 0; i < 2; i += 1) {
       const port = await freePort();

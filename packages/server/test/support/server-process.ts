@@ -83,3 +83,20 @@ export function person(base: () => string) {
     return { status: res.status, body: parsed };
   };
 }
+
+/**
+ * Empties the sign-in and sign-up counters. Spawned servers keep the production per-address limits
+ * (30 sign-ups per 15 min), and the counters live in the database for the loopback address shared
+ * by every earlier test file (whose in-process harness raises its own limits but still counts), so
+ * a file that signs people up through a spawned server starts from empty counters.
+ */
+export async function clearRateLimits(databaseUrl = process.env.DATABASE_URL): Promise<void> {
+  const { default: pg } = await import("pg");
+  const client = new pg.Client({ connectionString: databaseUrl });
+  await client.connect();
+  try {
+    await client.query("DELETE FROM rate_limit_buckets");
+  } finally {
+    await client.end();
+  }
+}
