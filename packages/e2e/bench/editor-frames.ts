@@ -86,8 +86,12 @@ try {
     const busy0 = await busy();
     const t0 = Date.now();
     await page.goto(`${stack.baseUrl}/projects/${projectId}/sketch`);
-    await page.getByTestId("plan-canvas").waitFor();
-    await page.waitForFunction(`Number(document.querySelector("[data-testid=plan-canvas]")?.getAttribute("data-scale")) !== 50`);
+    // Checked in the page on every animation frame: a locator's wait polls with a backoff of up to
+    // 500 ms between tries, which measured Playwright's polling rather than the page.
+    await page.waitForFunction(() => {
+      const c = document.querySelector("[data-testid=plan-canvas]");
+      return c !== null && Number(c.getAttribute("data-scale")) !== 50;
+    }, undefined, { polling: "raf" });
     await page.evaluate(TWO_FRAMES);
     const ms = Date.now() - t0;
     const busyMs = Math.round((await busy()) - busy0);
