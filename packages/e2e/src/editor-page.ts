@@ -73,3 +73,32 @@ export async function drawTwoRooms(page: Page): Promise<void> {
   await dragPlan(page, [0, 0], [4, 3]);
   await dragPlan(page, [4, 0], [8, 3]);
 }
+
+/** The parts of a plan document the browser tests read. */
+export type Doc = { elements: Record<string, { type: string; name?: string; widthM?: number; leaks?: { undercutMm: number }; constructionId?: string; outline?: Array<{ x: number; y: number }> }> };
+export const ofType = (doc: Doc, type: string) => Object.values(doc.elements).filter((e) => e.type === type);
+
+/** Opens a project's Sketch and waits for its canvas, saying what the page shows if it never comes. */
+export async function openSketch(page: Page, baseUrl: string, projectId: string): Promise<void> {
+  await page.goto(`${baseUrl}/projects/${projectId}/sketch`);
+  try {
+    await page.getByTestId("plan-canvas").waitFor({ timeout: 20_000 });
+  } catch (error) {
+    // Say what the page shows instead, so a failure here explains itself.
+    throw new Error(`the Sketch canvas did not appear; the page says: ${(await page.locator("main").innerText()).slice(0, 400)}`, { cause: error });
+  }
+}
+
+/** Selects an element through the accessible element list, the keyboard route to everything on the canvas. */
+export async function selectInList(page: Page, name: RegExp): Promise<void> {
+  await page.getByRole("tab", { name: "Elements" }).click();
+  await page.getByRole("button", { name }).first().click();
+  await page.getByRole("tab", { name: "Details" }).click();
+}
+
+/** The number of plan problems the status line shows. */
+export async function problemCount(page: Page): Promise<number> {
+  const text = (await page.getByRole("button", { name: /problem|No problems/ }).first().textContent()) ?? "";
+  const m = /^(\d+) problem/.exec(text);
+  return m ? Number(m[1]) : 0;
+}
