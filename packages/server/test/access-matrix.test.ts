@@ -37,6 +37,7 @@ const EXPECTED: Record<string, Access> = {
   "get /projects/:projectId/plan/revisions": ["owner", "surveyor", "planner"],
   "get /projects/:projectId/plan/revisions/:version": ["owner", "surveyor", "planner"],
   "post /projects/:projectId/analyses": "signed-in",
+  "post /projects/:projectId/analyses/drawing": "signed-in",
   "get /catalogue": ["owner", "surveyor", "planner"],
   "post /catalogue/constructions/preview": ["owner", "surveyor"],
   "post /catalogue/constructions": ["owner", "surveyor"],

@@ -5,6 +5,7 @@ import type supertest from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { constructionCatalogue, generateSyntheticBuilding, serializePlan } from "@hushmark/floorplan";
 import { evaluateScenario } from "../src/scenarios/scenario-evaluate.js";
+import { PDFParse } from "pdf-parse";
 import { addMember, newFirm, startHarness, type Harness } from "./harness.js";
 
 const demoPlanUrl = new URL("../../../examples/fernhollow-studio.plan.json", import.meta.url);
@@ -167,5 +168,39 @@ describe("the analysis API", () => {
     // The health answer did not wait for the analysis to finish.
     expect(healthDone).toBeLessThan(analysisDone);
     expect(healthDone - started).toBeLessThan(analysisDone - started);
+  });
+
+  it("draws the same analysis as a PDF for print, for the firm and the project's client", async () => {
+    // An earlier case saved a plan that cannot be analysed; save the demo plan again on top.
+    const current = (await owner.get(`/api/v1/projects/${projectId}/plan`)).body.version as number;
+    const good = (await owner.put(`/api/v1/projects/${projectId}/plan`).send({ baseVersion: current, document: demoPlan })).body.version as number;
+    const asJson = (await owner.post(`/api/v1/projects/${projectId}/analyses`).send(request(good))).body;
+    const binary = (r: supertest.Test) => r.buffer(true).parse((res, done) => {
+      const parts: Buffer[] = [];
+      res.on("data", (c: Buffer) => parts.push(c));
+      res.on("end", () => done(null, Buffer.concat(parts)));
+    });
+    for (const agent of [owner, client]) {
+      const res = await binary(agent.post(`/api/v1/projects/${projectId}/analyses/drawing`).send(request(good)));
+      expect(res.status, (res.body as Buffer).toString().slice(0, 300)).toBe(200);
+      expect(res.headers["content-type"]).toMatch(/^application\/pdf/);
+      expect(res.headers["content-disposition"]).toMatch(/attachment; filename="?studio-next-to-a-caf-sound-paths-v\d+\.pdf/);
+      const bytes = res.body as Buffer;
+      expect(bytes.subarray(0, 5).toString()).toBe("%PDF-");
+      const parser = new PDFParse({ data: new Uint8Array(bytes) });
+      const text = (await parser.getText()).text.replace(/\s+/g, " ");
+      await parser.destroy();
+      expect(text).toContain(`to ${asJson.receiver.name}`);
+      expect(text).toContain(`about ${(Math.round(asJson.receiver.dba * 10) / 10).toFixed(1)} dBA`);
+      expect(text).toContain(asJson.paths[0].label.replace(/\s+/g, " ").slice(0, 20));
+      expect(text).toContain("Predictions are estimates");
+    }
+  });
+
+  it("answers a drawing of a receiver that is not in the plan with 400 and its message, not a file", async () => {
+    const res = await owner.post(`/api/v1/projects/${projectId}/analyses/drawing`).send(request(version, { receiverId: "no-such-room" }));
+    expect(res.status).toBe(400);
+    expect(res.headers["content-type"]).toMatch(/json/);
+    expect(res.body.error.message).toMatch(/no-such-room|receiver|room/i);
   });
 });

@@ -39,6 +39,7 @@ describe("bad input", () => {
     ["revisions", "get", () => "/api/v1/projects/nope/plan/revisions", undefined, ["projectId"]],
     ["revision", "get", (id) => `/api/v1/projects/${id}/plan/revisions/abc`, undefined, ["version"]],
     ["analysis", "post", (id) => `/api/v1/projects/${id}/analyses`, { planVersion: "x", source: { kind: "airborne" }, receiverId: "" }, ["planVersion", "source.spaceId", "source.spectrum", "receiverId"]],
+    ["analysis drawing", "post", (id) => `/api/v1/projects/${id}/analyses/drawing`, { planVersion: "x", source: { kind: "airborne" }, receiverId: "" }, ["planVersion", "source.spaceId", "source.spectrum", "receiverId"]],
     ["construction preview", "post", () => "/api/v1/catalogue/constructions/preview", { id: "X", category: "roof", thicknessMm: -1 }, ["id", "name", "category", "thicknessMm", "csv"]],
     ["add construction", "post", () => "/api/v1/catalogue/constructions", { id: "ok-id", name: "Fine name", category: "wall", thicknessMm: 100, surfaceDensityKgM2: 20 }, ["sourceNote", "csv"]],
     ["remove construction", "delete", () => "/api/v1/catalogue/constructions/BAD_ID", undefined, ["constructionId"]],

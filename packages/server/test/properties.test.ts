@@ -80,6 +80,11 @@ const CASES: Record<string, RouteCase> = {
     valid: (f) => fc.constantFrom({ planVersion: f.planVersion, source: SETUP(0).source, receiverId: "record", target: { kind: "nc", nc: 25 } }),
     tables: ["plans", "plan_revisions"],
   },
+  "post /projects/:projectId/analyses/drawing": {
+    schema: s.analysisRequestSchema,
+    valid: (f) => fc.constantFrom({ planVersion: f.planVersion, source: SETUP(0).source, receiverId: "record", target: { kind: "nc", nc: 25 } }),
+    tables: ["plans", "plan_revisions"],
+  },
   "post /catalogue/constructions/preview": { schema: s.constructionUploadSchema, valid: () => constructionBody(), tables: ["firm_constructions"] },
   "post /catalogue/constructions": { schema: s.constructionUploadSchema, valid: () => constructionBody(), tables: ["firm_constructions"] },
   "delete /catalogue/constructions/:constructionId": { tables: ["firm_constructions"] },

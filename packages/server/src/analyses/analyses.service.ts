@@ -8,7 +8,8 @@ import { HttpError, notFound } from "../http/errors.js";
 import type { CatalogueService } from "../catalogue/catalogue.service.js";
 import { agreedBrief } from "../intake/agreed-brief.js";
 import type { ProjectsService } from "../projects/projects.service.js";
-import type { ParsedAnalysisRequest } from "./compute.js";
+import { renderAnalysisPdf } from "./analysis-pdf.js";
+import { catalogueFor, prepareNetwork, type ParsedAnalysisRequest } from "./compute.js";
 import type { AnalysisPool } from "./pool.js";
 
 /** Bumped when the computation changes, so older cached results are not served. */
@@ -55,7 +56,28 @@ export function createAnalysesService(dataSource: DataSource, projects: Projects
     return { ...outcome.result, planVersion: request.planVersion, cached: false, computeMs: outcome.computeMs };
   }
 
-  return { analyse };
+  /** The analysis drawn as a one-page PDF (the marked-up plan for print), computed like `analyse`. */
+  async function drawing(actor: Actor, projectId: string, asked: ParsedAnalysisRequest): Promise<{ filename: string; bytes: Buffer }> {
+    const result = await analyse(actor, projectId, asked);
+    const project = await projects.get(actor, projectId);
+    const { extra } = await catalogues.catalogueFor(actor.organizationId);
+    const document = await documentAt(projectId, result.planVersion);
+    const prepared = prepareNetwork(document, { source: asked.source, receiverId: asked.receiverId }, catalogueFor(extra));
+    // `analyse` has just computed this plan at this version, so it cannot fail here.
+    if (!prepared.ok) throw new HttpError(prepared.status, prepared.code, prepared.message);
+    const bytes = await renderAnalysisPdf({
+      projectTitle: project.title,
+      siteAddress: project.siteAddress ?? null,
+      firmName: actor.organizationName,
+      drawnOn: new Date().toISOString().slice(0, 10),
+      result,
+      prepared,
+    });
+    const safe = (s: string) => s.replace(/[^A-Za-z0-9]+/g, "-").replace(/^-|-$/g, "").toLowerCase() || "plan";
+    return { filename: `${safe(project.title)}-sound-paths-v${result.planVersion}.pdf`, bytes };
+  }
+
+  return { analyse, drawing };
 }
 
 export type AnalysesService = ReturnType<typeof createAnalysesService>;
