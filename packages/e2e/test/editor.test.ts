@@ -251,7 +251,7 @@ describe("the plan editor and the sound-path view", () => {
     await context.close();
   });
 
-  it("exports the marked-up plan as a PNG image", async () => {
+  it("exports the marked-up plan as a PNG image and as a PDF for print", async () => {
     const { context, page, errors } = await newPage(browser);
     await signIn(page, baseUrl, SURVEYOR);
     await page.locator("a[href*='/projects/']").first().click();
@@ -269,6 +269,15 @@ describe("the plan editor and the sound-path view", () => {
     expect(width).toBeGreaterThanOrEqual(1900);
     expect(height).toBeGreaterThan(900);
     expect(bytes.length).toBeGreaterThan(20_000);
+    // The same analysis drawn by the server as a vector PDF for print.
+    await page.getByRole("button", { name: "Export" }).click();
+    const pdfDownload = page.waitForEvent("download");
+    await page.getByRole("button", { name: "Drawing for print (PDF)" }).click();
+    const pdf = await pdfDownload;
+    expect(pdf.suggestedFilename()).toMatch(/sound-paths\.pdf$/);
+    const pdfBytes = await readFile((await pdf.path())!);
+    expect(pdfBytes.subarray(0, 5).toString()).toBe("%PDF-");
+    expect(pdfBytes.length).toBeGreaterThan(1_000);
     expect(errors).toEqual([]);
     await context.close();
   });

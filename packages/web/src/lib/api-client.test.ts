@@ -1,7 +1,7 @@
 import { meSchema } from "@hushmark/schemas";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { queueFetch } from "../test/render";
-import { ApiError, apiRequest } from "./api-client";
+import { api, ApiError, apiRequest } from "./api-client";
 
 const me = {
   user: { id: "0b5f6f2e-4a1e-4c47-9d43-2f1f3c1a7a01", email: "wren@quietline.example", displayName: "Wren Adair" },
@@ -83,5 +83,21 @@ describe("apiRequest", () => {
     expect(error.status).toBe(502);
     expect(error.code).toBe("server_error");
     expect(error.message).toMatch(/not answering/);
+  });
+});
+
+describe("api.postForFile", () => {
+  it("answers the file the server drew as a Blob, and a refusal as an ApiError", async () => {
+    const answers = [
+      new Response(new Uint8Array([0x25, 0x50, 0x44, 0x46, 0x2d]), { status: 200, headers: { "content-type": "application/pdf" } }),
+      new Response(JSON.stringify({ error: { code: "invalid_input", message: "Choose a receiving room." } }), { status: 400, headers: { "content-type": "application/json" } }),
+    ];
+    vi.stubGlobal("fetch", vi.fn(async () => answers.shift()!));
+    const file = await api.postForFile("/projects/p/analyses/drawing", { planVersion: 1 });
+    expect(file.type).toBe("application/pdf");
+    expect(new TextDecoder().decode(await file.arrayBuffer())).toBe("%PDF-");
+    const refused = await api.postForFile("/projects/p/analyses/drawing", {}).catch((e: unknown) => e);
+    expect(refused).toBeInstanceOf(ApiError);
+    expect((refused as ApiError).message).toBe("Choose a receiving room.");
   });
 });

@@ -83,6 +83,8 @@ export interface RequestOptions<T> {
   signal?: AbortSignal;
   /** Sign-in, sign-up and refresh must not trigger a refresh of their own. */
   skipRefresh?: boolean;
+  /** Answer the body as a Blob (a file the server renders) instead of parsing JSON. */
+  blob?: boolean;
 }
 
 // One refresh at a time: several queries failing together must not rotate the refresh token
@@ -138,6 +140,7 @@ export async function apiRequest<T>(path: string, options: RequestOptions<T> = {
     if (refreshed) response = await send(path, options);
   }
   if (!response.ok) throw await errorFromResponse(response);
+  if (options.blob) return (await response.blob()) as T;
   if (!options.schema) return undefined as T;
   const json: unknown = await response.json();
   const parsed = options.schema.safeParse(json);
@@ -154,4 +157,6 @@ export const api = {
   patch: <T>(path: string, body: unknown, schema?: z.ZodType<T>) => apiRequest<T>(path, { method: "PATCH", body, schema }),
   put: <T>(path: string, body: unknown, schema?: z.ZodType<T>) => apiRequest<T>(path, { method: "PUT", body, schema }),
   delete: (path: string) => apiRequest<void>(path, { method: "DELETE" }),
+  /** A POST whose answer is a file (a PDF the server draws). */
+  postForFile: (path: string, body: unknown) => apiRequest<Blob>(path, { method: "POST", body, blob: true }),
 };

@@ -6,7 +6,7 @@ import type { Command } from "@hushmark/editor-core";
 import { ExchangeMenuItems } from "../../exchange/components/exchange-menu-items";
 
 /** PNG and SVG export of the level shown, with title block, scale bar, optional north arrow and (on Paths) the legend. */
-export function ExportMenu({ plan, levelId, title, markup, onCommand, projectId }: { plan: Plan; levelId: string; title: string; markup?: ExportMarkup; onCommand?: (cmd: Command) => void; projectId?: string }) {
+export function ExportMenu({ plan, levelId, title, markup, onCommand, projectId, printPdf }: { plan: Plan; levelId: string; title: string; markup?: ExportMarkup; onCommand?: (cmd: Command) => void; projectId?: string; printPdf?: () => Promise<Blob> }) {
   const [open, setOpen] = useState(false);
   const [north, setNorth] = useState(true);
   const [error, setError] = useState<string | null>(null);
@@ -25,6 +25,11 @@ export function ExportMenu({ plan, levelId, title, markup, onCommand, projectId 
             try { const s = make(); downloadBlob(await svgToPng(s.svg, s.width, s.height, 3), `${name}.png`); setOpen(false); } catch (e) { setError((e as Error).message); }
           }}>Image (PNG, print resolution)</button>
           <button type="button" className="min-h-11 rounded px-2 py-1.5 text-left text-[14px] hover:bg-brand-soft" onClick={() => { const s = make(); downloadBlob(new Blob([s.svg], { type: "image/svg+xml" }), `${name}.svg`); setOpen(false); }}>Drawing (SVG)</button>
+          {printPdf ? (
+            <button type="button" className="min-h-11 rounded px-2 py-1.5 text-left text-[14px] hover:bg-brand-soft" onClick={async () => {
+              try { downloadBlob(await printPdf(), `${name}.pdf`); setOpen(false); } catch (e) { setError((e as Error).message); }
+            }}>Drawing for print (PDF)</button>
+          ) : null}
           {markup ? null : <ExchangeMenuItems plan={plan} levelId={levelId} title={title} onDone={() => setOpen(false)} {...(onCommand ? { onCommand } : {})} {...(projectId ? { projectId } : {})} />}
           {error ? <p role="alert" className="px-1 text-sm text-danger">{error}</p> : null}
         </div>

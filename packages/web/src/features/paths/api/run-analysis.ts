@@ -13,6 +13,11 @@ export function runAnalysis(projectId: string, request: AnalysisRequest): Promis
   return api.post(`/projects/${encodeURIComponent(projectId)}/analyses`, request, analysisResultSchema);
 }
 
+/** The same analysis drawn by the server as a one-page PDF for print. */
+export function analysisDrawing(projectId: string, request: AnalysisRequest): Promise<Blob> {
+  return api.postForFile(`/projects/${encodeURIComponent(projectId)}/analyses/drawing`, request);
+}
+
 export const analysisQueryOptions = (projectId: string, request: AnalysisRequest | null) =>
   queryOptions({
     queryKey: request ? analysisKeys.detail(projectId, request) : [...analysisKeys.all(projectId), "none"],

@@ -12,7 +12,7 @@ import { savePlan } from "../../editor/api/save-plan";
 import { ExportMenu } from "../../editor/components/export-menu";
 import { projectKeys } from "../../projects/api/keys";
 import { isApiError } from "../../../lib/api-client";
-import { useAnalysis } from "../api/run-analysis";
+import { analysisDrawing, useAnalysis } from "../api/run-analysis";
 import { SHARE_LEGEND, shareColour } from "../model/share-scale";
 import { AnalysisInputs, defaultInputs, toAnalysisTarget, type PathInputs } from "./analysis-inputs";
 import { ShareOverlay, PathLines } from "./analysis-overlay";
@@ -126,7 +126,7 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
             </select>
             <button type="button" className="min-h-9 rounded-md px-2 text-[14px] hover:bg-ink/5" onClick={() => setViewport(fitBounds(planBounds(store.plan, levelId), canvas.width, canvas.height))}>Fit to plan</button>
             {recomputing ? <span role="status" className="inline-flex items-center gap-1.5 text-[13px] font-medium text-caution" data-testid="recomputing"><span className="h-2 w-2 animate-pulse rounded-full bg-caution" aria-hidden="true" /> Recomputing…</span> : null}
-            <div className="ml-auto"><ExportMenu plan={plan} levelId={levelId} title={title} {...(markup ? { markup } : {})} /></div>
+            <div className="ml-auto"><ExportMenu plan={plan} levelId={levelId} title={title} {...(markup ? { markup } : {})} {...(request && analysis.data ? { printPdf: () => analysisDrawing(projectId, request) } : {})} /></div>
           </div>
           <div ref={canvas.ref} className="relative h-[360px] flex-none md:h-auto md:min-h-0 md:flex-1">
             <PlanCanvas
