@@ -1,78 +1,34 @@
-import { spawn, type ChildProcess } from "node:child_process";
 import { readFileSync } from "node:fs";
-import { createServer } from "node:net";
-import { fileURLToPath } from "node:url";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { startMailFake, type MailFake } from "@hushmark/fakes";
 import { DEMO_PRICE_BOOK } from "../src/price-book/demo-price-book.js";
 import { PASSWORD, uniqueEmail } from "./harness.js";
-import { clearRateLimits } from "./support/server-process.js";
+import { clearRateLimits, client, startServerProcess, type ServerProcess } from "./support/server-process.js";
 
-const serverDir = fileURLToPath(new URL("..", import.meta.url));
 const demoPlan = JSON.parse(readFileSync(new URL("../../../examples/fernhollow-studio.plan.json", import.meta.url), "utf8")) as Record<string, unknown>;
 // Each search step pauses this long in both processes, so a search is still running when the other process cancels it.
 const STEP_MS = 150;
 
-const freePort = () =>
-  new Promise<number>((resolve) => {
-    const s = createServer();
-    s.listen(0, "127.0.0.1", () => {
-      const a = s.address();
-      s.close(() => resolve(typeof a === "object" && a ? a.port : 0));
-    });
-  });
-
-/** A cookie-keeping client for one person, talking to whichever process it is given. */
-function person() {
-  const cookies = new Map<string, string>();
-  return async (base: string, method: string, path: string, body?: unknown) => {
-    const res = await fetch(`${base}${path}`, {
-      method,
-      headers: { "content-type": "application/json", cookie: [...cookies].map(([k, v]) => `${k}=${v}`).join("; ") },
-      ...(body === undefined ? {} : { body: JSON.stringify(body) }),
-    });
-    for (const c of res.headers.getSetCookie()) {
-      const [k, v] = c.split(";")[0]!.split("=");
-      if (v) cookies.set(k!, v);
-      else cookies.delete(k!);
-    }
-    const text = await res.text();
-    return { status: res.status, body: text ? JSON.parse(text) : null };
-  };
-}
-
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
 describe("option searches across two server processes", () => {
-  const procs: ChildProcess[] = [];
+  const procs: ServerProcess[] = [];
   const bases: string[] = [];
   let mail: MailFake;
-  const owner = person();
+  const c = client();
+  const owner = (base: string, method: string, path: string, body?: unknown) => c.call(base, method, path, body);
   let projectId = "";
   let body: Record<string, unknown> = {};
 
   beforeAll(async () => {
     await clearRateLimits();
     mail = await startMailFake();
-    for (let i = 0; i < 2; i += 1) {
-      const port = await freePort();
-      procs.push(spawn("node", ["dist/index.js"], {
-        cwd: serverDir,
-        env: {
-          ...process.env, NODE_ENV: "test", HUSHMARK_PORT: String(port), HUSHMARK_PUBLIC_URL: "http://hushmark.test",
-          HUSHMARK_JWT_SECRET: "a shared secret for both processes, 32+ chars", HUSHMARK_SMTP_PORT: String(mail.smtpPort),
-          HUSHMARK_LOG_LEVEL: "silent", HUSHMARK_TEST_SEARCH_STEP_MS: String(STEP_MS),
-        },
-        stdio: "ignore",
-      }));
-      bases.push(`http://127.0.0.1:${port}`);
-    }
-    for (const base of bases) {
-      for (let i = 0; i < 100; i += 1) {
-        if (await fetch(`${base}/api/v1/health`).then((r) => r.ok, () => false)) break;
-        await sleep(100);
-      }
-    }
+    const env = {
+      HUSHMARK_PUBLIC_URL: "http://hushmark.test", HUSHMARK_JWT_SECRET: "a shared secret for both processes, 32+ chars",
+      HUSHMARK_SMTP_PORT: String(mail.smtpPort), HUSHMARK_LOG_LEVEL: "silent", HUSHMARK_TEST_SEARCH_STEP_MS: String(STEP_MS),
+    };
+    procs.push(...(await Promise.all([startServerProcess(env), startServerProcess(env)])));
+    bases.push(...procs.map((p) => p.base));
     const a = bases[0]!;
     expect((await owner(a, "POST", "/api/v1/auth/sign-up", { firmName: "Search Firm", displayName: "Rhea", email: uniqueEmail("search2"), password: PASSWORD })).status).toBe(201);
     for (const item of DEMO_PRICE_BOOK) expect((await owner(a, "POST", "/api/v1/price-book/items", item)).status).toBe(201);
@@ -86,7 +42,7 @@ describe("option searches across two server processes", () => {
     };
   });
   afterAll(async () => {
-    for (const p of procs) p.kill("SIGTERM");
+    await Promise.all(procs.map((p) => p.kill("SIGTERM")));
     await mail.close();
   });
 

@@ -57,31 +57,48 @@ export async function startServerProcess(env: Record<string, string>, port?: num
   throw new Error(`the server did not answer within 30 s:\n${log}`);
 }
 
-/** A cookie-keeping JSON client for one person (a browser without the browser). */
-export function person(base: () => string) {
-  const cookies = new Map<string, string>();
-  return async function call(method: string, path: string, body?: unknown): Promise<{ status: number; body: any }> {
-    const res = await fetch(`${base()}${path}`, {
-      method,
-      headers: { "content-type": "application/json", cookie: [...cookies].map(([k, v]) => `${k}=${v}`).join("; ") },
-      ...(body === undefined ? {} : { body: JSON.stringify(body) }),
-      signal: AbortSignal.timeout(15_000),
-    });
-    for (const c of res.headers.getSetCookie()) {
-      const [pair] = c.split(";");
-      const [k, v] = pair!.split("=");
-      if (v) cookies.set(k!, v);
-      else cookies.delete(k!);
-    }
-    const text = await res.text();
-    let parsed: unknown = null;
-    try {
-      parsed = text ? JSON.parse(text) : null;
-    } catch {
-      parsed = text;
-    }
-    return { status: res.status, body: parsed };
+export type Answer = { status: number; body: any };
+
+/**
+ * A cookie-keeping JSON client for one person (a browser without the browser) that can talk to
+ * whichever server process it is given on each call; its cookies can be copied (a stolen session).
+ */
+export function client() {
+  let cookies = new Map<string, string>();
+  return {
+    async call(base: string, method: string, path: string, body?: unknown): Promise<Answer> {
+      const res = await fetch(`${base}${path}`, {
+        method,
+        headers: { "content-type": "application/json", cookie: [...cookies].map(([k, v]) => `${k}=${v}`).join("; ") },
+        ...(body === undefined ? {} : { body: JSON.stringify(body) }),
+        signal: AbortSignal.timeout(15_000),
+      });
+      for (const c of res.headers.getSetCookie()) {
+        const [pair] = c.split(";");
+        const [k, v] = pair!.split("=");
+        if (v) cookies.set(k!, v);
+        else cookies.delete(k!);
+      }
+      const text = await res.text();
+      let parsed: unknown = null;
+      try {
+        parsed = text ? JSON.parse(text) : null;
+      } catch {
+        parsed = text;
+      }
+      return { status: res.status, body: parsed };
+    },
+    cookieSnapshot: () => new Map(cookies),
+    restore: (snapshot: Map<string, string>) => {
+      cookies = new Map(snapshot);
+    },
   };
+}
+
+/** The same client bound to one server (whose address may change when it is restarted). */
+export function person(base: () => string) {
+  const c = client();
+  return (method: string, path: string, body?: unknown): Promise<Answer> => c.call(base(), method, path, body);
 }
 
 /**
