@@ -52,6 +52,19 @@ async function editOffline(context: BrowserContext, page: Page, baseUrl: string,
 }
 
 /**
+ * What the server holds once a save sent as the page went away has had time to land: that
+ * request is still in flight when the page is gone, so wait up to two seconds for it.
+ */
+async function settledPlan(page: Page, baseUrl: string, projectId: string, version: number) {
+  let plan = await getPlan(page, baseUrl, projectId);
+  for (let i = 0; i < 20 && plan.version === version; i += 1) {
+    await page.waitForTimeout(100);
+    plan = await getPlan(page, baseUrl, projectId);
+  }
+  return plan;
+}
+
+/**
  * Back online in a fresh page load: the edit ends as exactly one new revision, without a
  * conflict. Kept on the device, it is put back (the Sketch says so) and saved; if its save had
  * reached the server as the page unloaded, the Sketch sees that and drops the kept copy.
@@ -91,7 +104,7 @@ describe("the editor's offline queue across page loads", () => {
     // The API client is not behind the page's network, so this reads what the server holds now.
     // Chromium can let the save sent on `pagehide` through its offline emulation; then the edit is
     // on the server already and the answer was lost, like a connection that drops after the write.
-    const during = await getPlan(page, baseUrl, projectId);
+    const during = await settledPlan(page, baseUrl, projectId, before.version);
     const arrivedEarly = during.version !== before.version;
     if (arrivedEarly) expect(during.version).toBe(before.version + 1);
     console.info(`[offline-reload] the edit ${arrivedEarly ? "reached the server as the page unloaded" : "stayed on the device"}`);
@@ -111,7 +124,7 @@ describe("the editor's offline queue across page loads", () => {
     await page.close();
     await goOnline(context);
     const reopened = await context.newPage();
-    const arrivedEarly = (await getPlan(reopened, baseUrl, projectId)).version !== before.version;
+    const arrivedEarly = (await settledPlan(reopened, baseUrl, projectId, before.version)).version !== before.version;
     await expectDelivered(reopened, baseUrl, projectId, before, "Room from a closed tab", arrivedEarly);
     await context.close();
   });
