@@ -52,6 +52,19 @@ async function editOffline(context: BrowserContext, page: Page, baseUrl: string,
 }
 
 /**
+ * Goes to a blank page from Chromium's network-error page. That page can still be on its way in
+ * (its own navigation to `chrome-error://`) when the test asks, which interrupts the first try.
+ */
+async function leaveErrorPage(page: Page): Promise<void> {
+  for (let attempt = 0; ; attempt += 1) {
+    const left = await page.goto("about:blank").then(() => undefined, (e: Error) => e);
+    if (!left && page.url() === "about:blank") return;
+    if (attempt >= 5) throw left ?? new Error(`still on ${page.url()}`);
+    await page.waitForTimeout(200);
+  }
+}
+
+/**
  * What the server holds once a save sent as the page went away has had time to land: that
  * request is still in flight when the page is gone, so wait up to two seconds for it.
  */
@@ -110,7 +123,7 @@ describe("the editor's offline queue across page loads", () => {
     console.info(`[offline-reload] the edit ${arrivedEarly ? "reached the server as the page unloaded" : "stayed on the device"}`);
     // Chromium's error page reloads by itself when the network returns; leave it first so the
     // test, not that race, decides when the Sketch opens again.
-    await page.goto("about:blank");
+    await leaveErrorPage(page);
     await goOnline(context);
     await expectDelivered(page, baseUrl, projectId, before, "Reloaded room", arrivedEarly);
     expect(errors.filter((e) => !/ERR_INTERNET_DISCONNECTED|Failed to fetch|NetworkError/.test(e))).toEqual([]);

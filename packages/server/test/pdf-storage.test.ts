@@ -114,6 +114,26 @@ describe("proposal PDFs and closing reports in object storage", () => {
     expect(await pdfText(again!)).toContain(money(content.total));
   });
 
+  it("a run after one killed between storing its PDF and recording it removes the unrecorded file", async () => {
+    const files = createFilesService(h.dataSource, storage);
+    const catalogues = createCatalogueService(h.dataSource);
+    const [recorded] = await pdfRecords();
+    const [project] = await h.dataSource.query("SELECT project_id FROM proposals WHERE id = $1", [proposalId]);
+    // What the killed run left: its file stored, and the version still without a PDF.
+    await (await h.dataSource.transaction((m) => files.remove(m, recorded!)))();
+    const orphan = await files.store({ organizationId: recorded!.organizationId, userId: null }, project.project_id, files.fromBuffer(Buffer.from("%PDF-1.7 killed run"), { contentType: "application/pdf", originalName: recorded!.originalName }));
+    // A person's upload under the same name is not the job's to remove.
+    const upload = await files.store({ organizationId: recorded!.organizationId, userId: (await h.dataSource.query("SELECT user_id FROM memberships WHERE organization_id = $1 LIMIT 1", [recorded!.organizationId]))[0].user_id }, project.project_id, files.fromBuffer(Buffer.from("%PDF-1.7 uploaded"), { contentType: "application/pdf", originalName: recorded!.originalName }));
+    await renderProposalVersion(h.dataSource, catalogues, files, { proposalId, version: 1 });
+    const after = (await pdfRecords()).filter((r) => r.id !== upload.id);
+    expect(after).toHaveLength(1);
+    expect(after[0]!.id).not.toBe(orphan.id);
+    const [v] = await h.dataSource.query("SELECT pdf_file_id FROM proposal_versions WHERE proposal_id = $1 AND version = 1", [proposalId]);
+    expect(v.pdf_file_id).toBe(after[0]!.id);
+    expect((await objects()).sort()).toEqual([after[0]!.objectKey, upload.objectKey].sort());
+    await (await h.dataSource.transaction((m) => files.remove(m, upload)))();
+  });
+
   it("stores a closing report once, however often and however concurrently it is downloaded", async () => {
     await h.dataSource.query(`UPDATE proposals SET status = 'deposit_paid' WHERE id = $1`, [proposalId]);
     const before = Array.from({ length: 21 }, (_, i) => 50 - i * 0.5);
