@@ -1,8 +1,10 @@
 import { useEffect, useId, useRef, type ReactNode } from "react";
+import { createPortal } from "react-dom";
 
 /**
  * A modal on the native <dialog>: the browser traps focus, Escape closes it and the rest of
- * the page becomes inert, with no library needed.
+ * the page becomes inert, with no library needed. It is drawn at the end of the page's body, so
+ * a menu that opened it can close or hide without taking the dialog with it.
  */
 export function Dialog({ open, onClose, title, description, children }: { open: boolean; onClose: () => void; title: string; description?: ReactNode; children: ReactNode }) {
   const ref = useRef<HTMLDialogElement>(null);
@@ -19,7 +21,7 @@ export function Dialog({ open, onClose, title, description, children }: { open: 
       else dialog.removeAttribute("open");
     }
   }, [open]);
-  return (
+  return createPortal(
     <dialog
       ref={ref}
       aria-labelledby={titleId}
@@ -40,6 +42,7 @@ export function Dialog({ open, onClose, title, description, children }: { open: 
           {children}
         </div>
       ) : null}
-    </dialog>
+    </dialog>,
+    document.body,
   );
 }

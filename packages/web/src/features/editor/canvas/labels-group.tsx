@@ -64,6 +64,8 @@ export interface LabelsProps {
   roomNamesFirst?: boolean;
   /** Plan points (metres) that something else draws a marker (22 px across) on, kept clear of text. */
   keepClear?: readonly { x: number; y: number }[];
+  /** Boxes on the canvas (stage px) that something drawn above the labels covers, kept clear too. */
+  keepClearPx?: readonly LabelBox[];
 }
 
 /**
@@ -75,12 +77,12 @@ export interface LabelsProps {
  * it fits inside its room; a note that does not fit becomes a marker.
  */
 export const LabelsGroup = memo(function LabelsGroup(props: LabelsProps) {
-  const { plan, levelId, scale, unit, only, exclude, width, height, ox = 0, oy = 0, pinReadings, roomNamesFirst, keepClear } = props;
+  const { plan, levelId, scale, unit, only, exclude, width, height, ox = 0, oy = 0, pinReadings, roomNamesFirst, keepClear, keepClearPx } = props;
   return (
     <Shape
       listening={false}
       perfectDrawEnabled={false}
-      sceneFunc={(context) => paintLabels(context._context, { plan, levelId, scale, unit, only, exclude, width, height, ox, oy, pinReadings, roomNamesFirst, keepClear })}
+      sceneFunc={(context) => paintLabels(context._context, { plan, levelId, scale, unit, only, exclude, width, height, ox, oy, pinReadings, roomNamesFirst, keepClear, keepClearPx })}
     />
   );
 });
@@ -89,7 +91,7 @@ type PaintLabels = Omit<LabelsProps, "ox" | "oy"> & { ox: number; oy: number };
 
 /** Paints the labels of a level; exported for the plan export, which draws the same text. */
 export function paintLabels(ctx: CanvasRenderingContext2D, spec: PaintLabels): void {
-  const { plan, levelId, scale, unit, only, exclude, width, height, ox, oy, pinReadings, roomNamesFirst, keepClear } = spec;
+  const { plan, levelId, scale, unit, only, exclude, width, height, ox, oy, pinReadings, roomNamesFirst, keepClear, keepClearPx } = spec;
   const keep = (id: string) => (only ? only.has(id) : !exclude?.has(id));
   // Off-screen labels (with a margin for text hanging past the edge) are neither placed nor drawn.
   const onScreen = (x: number, y: number, margin = 160) =>
@@ -99,6 +101,7 @@ export function paintLabels(ctx: CanvasRenderingContext2D, spec: PaintLabels): v
   ctx.textBaseline = "middle";
   // The numbered markers of a proposal are circles 22 px across (marked-up-plan.tsx).
   for (const p of keepClear ?? []) grid.place({ x: p.x * scale - 11, y: -p.y * scale - 11, w: 22, h: 22 }, 0);
+  for (const b of keepClearPx ?? []) grid.place({ x: b.x - ox, y: b.y - oy, w: b.w, h: b.h }, 0);
 
   // The rings go down first whatever the order, so no text ever covers a measurement place.
   const pins: { label: string; reading: string | undefined; x: number; y: number }[] = [];
@@ -197,6 +200,8 @@ export function paintLabels(ctx: CanvasRenderingContext2D, spec: PaintLabels): v
       const { box, name, font } = placed;
       const cx = box.x + box.w / 2;
       ctx.font = font; ctx.fillStyle = ink;
+      // On read-only views lines are drawn under the names (Paths), so a name gets a halo.
+      if (roomNamesFirst) { ctx.lineJoin = "round"; ctx.lineWidth = 3.5; ctx.strokeStyle = panel; ctx.strokeText(name, cx, box.y + 8); }
       ctx.fillText(name, cx, box.y + 8);
       if (box.h > 16) { ctx.font = SMALL_FONT; ctx.fillStyle = muted; ctx.fillText(area!, cx, box.y + 24); }
     }

@@ -6,6 +6,7 @@ import type { Tool } from "@hushmark/editor-core";
 import type { Viewport } from "../model/viewport";
 import { ElementsGroup, MovingGroup, changedIds } from "./elements-group";
 import { LabelsGroup } from "./labels-group";
+import type { LabelBox } from "./label-layout";
 import { GridLayer } from "./grid-layer";
 import { UnderlayLayer } from "./underlay-layer";
 import { UiGroup } from "./ui-group";
@@ -34,6 +35,10 @@ export interface PlanCanvasProps {
   pinReadings?: ReadonlyMap<string, string>;
   /** Labels for the overlay, in screen pixels for the view it is drawn at. */
   overlayLabels?: (drawnView: Viewport) => ReactNode;
+  /** Drawn in screen pixels under the names (Paths' lines), which get a halo to stay readable. */
+  overlayUnderLabels?: (drawnView: Viewport) => ReactNode;
+  /** Canvas boxes (px) that `overlayLabels` covers at a drawn view; names move out of them. Answer the same array for the same view. */
+  keepClearPx?: (drawnView: Viewport) => readonly LabelBox[];
   /** A read-only view: room names come before the text of pins and notes (see LabelsGroup). */
   roomNamesFirst?: boolean;
   /** Plan points the overlay labels draw markers on, kept clear of names (memoise the array). */
@@ -70,7 +75,7 @@ export interface PlanCanvasHandle {
  * is editor-core's, so no Konva node listens for events; the wrapper div takes the pointer.
  */
 export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function PlanCanvas(props, ref) {
-  const { plan, basePlan, levelId, ghostLevelId, selection, problems, viewport: v, setViewport, width, height, tool, overlay, overlayLabels, onKeyDown, label, cursor, pinReadings } = props;
+  const { plan, basePlan, levelId, ghostLevelId, selection, problems, viewport: v, setViewport, width, height, tool, overlay, overlayLabels, overlayUnderLabels, onKeyDown, label, cursor, pinReadings } = props;
   const stageRef = useRef<Konva.Stage>(null);
   const underlayRef = useRef<Konva.Layer>(null);
   const gridRef = useRef<Konva.Layer>(null);
@@ -78,6 +83,7 @@ export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function
   const overlayRef = useRef<Konva.Layer>(null);
   // The heavy layers draw at `d` and are moved by the compositor until the view settles at `v`.
   const d = useCompositedView(v, [underlayRef, gridRef, elementsRef, overlayRef]);
+  const keepClearPx = props.keepClearPx?.(d);
   const [, setTick] = useState(0);
   const painted = useAfterFirstPaint();
   const movingRef = useRef<{ key: string; ids: ReadonlySet<string> }>({ key: "", ids: new Set() });
@@ -138,9 +144,10 @@ export const PlanCanvas = forwardRef<PlanCanvasHandle, PlanCanvasProps>(function
         </Layer>
         <Layer ref={overlayRef} listening={false}>
           <Group x={d.ox} y={d.oy} scaleX={d.scale} scaleY={-d.scale}>{overlay}</Group>
+          {overlayUnderLabels?.(d)}
           {/* Names stay above the analysis colours so they can always be read. */}
           <Group x={d.ox} y={d.oy}>
-            {painted ? <LabelsGroup plan={drawnPlan} levelId={levelId} scale={d.scale} unit={plan.displayUnit} exclude={moving} width={width} height={height} ox={d.ox} oy={d.oy} roomNamesFirst={props.roomNamesFirst ?? false} {...(pinReadings ? { pinReadings } : {})} {...(props.keepClear ? { keepClear: props.keepClear } : {})} /> : null}
+            {painted ? <LabelsGroup plan={drawnPlan} levelId={levelId} scale={d.scale} unit={plan.displayUnit} exclude={moving} width={width} height={height} ox={d.ox} oy={d.oy} roomNamesFirst={props.roomNamesFirst ?? false} {...(pinReadings ? { pinReadings } : {})} {...(props.keepClear ? { keepClear: props.keepClear } : {})} {...(keepClearPx ? { keepClearPx } : {})} /> : null}
           </Group>
           {overlayLabels?.(d)}
         </Layer>

@@ -10,6 +10,9 @@ export function ExportMenu({ plan, levelId, title, markup, onCommand, projectId,
   const [open, setOpen] = useState(false);
   const [north, setNorth] = useState(true);
   const [error, setError] = useState<string | null>(null);
+  // While an import dialog from the menu is open the menu steps aside (it stays mounted, since
+  // the dialog's state lives in it) and closes when the dialog does.
+  const [dialogOpen, setDialogOpen] = useState(false);
   const make = () => {
     const level = plan.elements[levelId];
     return planToSvg(plan, levelId, { title, levelName: level?.type === "level" ? level.name : "", date: new Date().toLocaleDateString(), north, ...(markup ? { markup } : {}) });
@@ -17,9 +20,9 @@ export function ExportMenu({ plan, levelId, title, markup, onCommand, projectId,
   const name = `${fileSafe(title)}${markup ? "-sound-paths" : "-plan"}`;
   return (
     <div className="relative">
-      <button type="button" aria-expanded={open} onClick={() => setOpen((o) => !o)} className="min-h-10 rounded-md px-2 text-[14px] font-medium hover:bg-ink/5">Export</button>
+      <button type="button" aria-expanded={open && !dialogOpen} onClick={() => setOpen((o) => !o)} className="min-h-10 rounded-md px-2 text-[14px] font-medium hover:bg-ink/5">Export</button>
       {open ? (
-        <div className="absolute right-0 top-11 z-20 flex w-72 max-w-[calc(100vw-2.5rem)] flex-col gap-0.5 rounded-md border border-rule bg-panel p-2 shadow-lg">
+        <div className={`absolute right-0 top-11 z-20 ${dialogOpen ? "hidden" : "flex"} w-72 max-w-[calc(100vw-2.5rem)] flex-col gap-0.5 rounded-md border border-rule bg-panel p-2 shadow-lg`}>
           <label className="flex min-h-9 items-center gap-2 px-1 text-[14px]"><input type="checkbox" checked={north} onChange={(e) => setNorth(e.target.checked)} className="h-4 w-4 accent-brand" /> North arrow</label>
           <button type="button" className="min-h-11 rounded px-2 py-1.5 text-left text-[14px] hover:bg-brand-soft" onClick={async () => {
             try { const s = make(); downloadBlob(await svgToPng(s.svg, s.width, s.height, 3), `${name}.png`); setOpen(false); } catch (e) { setError((e as Error).message); }
@@ -30,7 +33,7 @@ export function ExportMenu({ plan, levelId, title, markup, onCommand, projectId,
               try { downloadBlob(await printPdf(), `${name}.pdf`); setOpen(false); } catch (e) { setError((e as Error).message); }
             }}>Drawing for print (PDF)</button>
           ) : null}
-          {markup ? null : <ExchangeMenuItems plan={plan} levelId={levelId} title={title} onDone={() => setOpen(false)} {...(onCommand ? { onCommand } : {})} {...(projectId ? { projectId } : {})} />}
+          {markup ? null : <ExchangeMenuItems plan={plan} levelId={levelId} title={title} onDone={() => setOpen(false)} onDialogChange={setDialogOpen} {...(onCommand ? { onCommand } : {})} {...(projectId ? { projectId } : {})} />}
           {error ? <p role="alert" className="px-1 text-sm text-danger">{error}</p> : null}
         </div>
       ) : null}

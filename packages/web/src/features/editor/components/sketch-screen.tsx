@@ -11,7 +11,7 @@ import { editorKeyHandler } from "../hooks/use-editor-keys";
 import { useConflict } from "../hooks/use-conflict";
 import { useProblems } from "../hooks/use-problems";
 import { usePinReadings } from "../hooks/use-pin-readings";
-import { NARROW, useMediaQuery } from "../hooks/use-media-query";
+import { NARROW, useMediaQuery } from "../../../lib/use-media-query";
 import { ToolRail } from "./tool-rail";
 import { StatusLine } from "./status-line";
 import { DetailsPanel } from "../panels/details-panel";

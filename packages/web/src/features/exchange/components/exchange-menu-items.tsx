@@ -11,7 +11,11 @@ import { IfcImportDialog } from "./ifc-import-dialog";
 
 const item = "min-h-11 rounded px-2 py-1.5 text-left text-[14px] hover:bg-brand-soft";
 
-type Props = { plan: Plan; levelId: string; title: string; onCommand?: (cmd: Command) => void; onDone?: () => void };
+type Props = {
+  plan: Plan; levelId: string; title: string; onCommand?: (cmd: Command) => void; onDone?: () => void;
+  /** Told when one of the import or site dialogs opens or closes, so the menu can step aside. */
+  onDialogChange?: (open: boolean) => void;
+};
 
 /**
  * Export menu entries for other programs: the shown level as DXF and GeoJSON (at the project's
@@ -28,9 +32,13 @@ function WithProject({ projectId, ...props }: Props & { projectId: string }) {
   return <Items {...props} {...(project.data ? { project: project.data } : {})} />;
 }
 
-function Items({ plan, levelId, title, onCommand, onDone, project }: Props & { project?: Project }) {
+function Items({ plan, levelId, title, onCommand, onDone, onDialogChange, project }: Props & { project?: Project }) {
   const [note, setNote] = useState<string | null>(null);
-  const [dialog, setDialog] = useState<"dxf" | "ifc" | "site" | null>(null);
+  const [dialog, setDialogState] = useState<"dxf" | "ifc" | "site" | null>(null);
+  const setDialog = (d: "dxf" | "ifc" | "site" | null) => {
+    setDialogState(d);
+    onDialogChange?.(d !== null);
+  };
   const done = () => onDone?.();
   const site = project?.site ?? undefined;
   return (

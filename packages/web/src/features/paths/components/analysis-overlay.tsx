@@ -1,12 +1,14 @@
 import { memo } from "react";
 import { Arrow, Circle, Group, Label, Line, Rect, Tag, Text } from "react-konva";
 import type { AnalysisResult } from "@hushmark/schemas";
-import type { Plan } from "@hushmark/floorplan";
+import { elementsOfType, polygonCentroid, type Plan } from "@hushmark/floorplan";
 import { levelOf } from "@hushmark/editor-core";
 import { openingSpan, wallBands } from "../../editor/model/wall-geometry";
 import { toScreen, type Viewport } from "../../editor/model/viewport";
 import { shareColour } from "../model/share-scale";
 import { overlayTarget } from "../model/overlay-target";
+import { placePathTags } from "../model/path-tags";
+import type { LabelBox } from "../../editor/canvas/label-layout";
 import { ink, panel } from "../../editor/canvas/colours";
 
 type Elements = AnalysisResult["elements"];
@@ -60,26 +62,81 @@ export const ShareOverlay = memo(function ShareOverlay({ plan, levelId, elements
   );
 });
 
-/** The weakest paths drawn through the elements they cross, numbered, with their level (screen pixels). */
-export function PathLines({ result, levelId, v, dimmed, highlight }: { result: AnalysisResult; levelId: string; v: Viewport; dimmed: boolean; highlight: number | null }) {
+/** A path's screen points on the level shown, and its tag's place (see `pathLayout`). */
+export interface PathLayout {
+  lines: { rank: number; points: { x: number; y: number }[]; text: string }[];
+  tags: Map<number, LabelBox>;
+  /** The same boxes as a list, for the names to keep clear of. */
+  tagBoxes: LabelBox[];
+}
+
+const TAG_FONT = "600 12px 'Work Sans', sans-serif";
+const TAG_H = 22;
+let measureCtx: CanvasRenderingContext2D | null | undefined;
+/** The tag text's width, px, from a canvas of our own (an estimate where there is none, as in tests). */
+function tagWidth(text: string): number {
+  if (measureCtx === undefined) measureCtx = typeof document === "undefined" ? null : document.createElement("canvas").getContext("2d");
+  if (!measureCtx) return text.length * 7.4;
+  measureCtx.font = TAG_FONT;
+  return measureCtx.measureText(text).width;
+}
+
+/**
+ * The three weakest paths on the level shown, in screen pixels at view `v`, with each path's
+ * tag placed off the room names and the other tags. Room names are judged by a box of the name's
+ * width (within its room) and two lines' height at the room's centre, where the labels put them.
+ */
+export function pathLayout(plan: Plan, result: AnalysisResult, levelId: string, v: Viewport): PathLayout {
+  const lines = result.paths.slice(0, 3).flatMap((p) => {
+    const points = p.polyline.filter((q) => q.levelId === levelId || q.levelId === null).map((q) => toScreen(v, q.x, q.y));
+    return points.length < 2 ? [] : [{ rank: p.rank, points, text: `${p.rank}  ${p.dba.toFixed(0)} dBA` }];
+  });
+  const names: LabelBox[] = [];
+  for (const r of elementsOfType(plan, "room")) {
+    if (r.levelId !== levelId || r.outline.length < 3) continue;
+    const centre = polygonCentroid(r.outline);
+    const c = toScreen(v, centre.x, centre.y);
+    const xs = r.outline.map((q) => q.x);
+    const roomW = (Math.max(...xs) - Math.min(...xs)) * v.scale;
+    const w = Math.min(roomW, tagWidth(r.name || "Unnamed room") + 8);
+    names.push({ x: c.x - w / 2, y: c.y - 17, w, h: 34 });
+  }
+  const tags = placePathTags(lines.map((l) => ({ rank: l.rank, points: l.points, w: tagWidth(l.text) + 10, h: TAG_H })), names);
+  return { lines, tags, tagBoxes: [...tags.values()] };
+}
+
+/** The weakest paths' lines, numbered by rank (drawn under the room names). */
+export function PathLines({ layout, dimmed, highlight }: { layout: PathLayout; dimmed: boolean; highlight: number | null }) {
   return (
     <Group listening={false} opacity={dimmed ? 0.35 : 1}>
-      {result.paths.slice(0, 3).map((p) => {
-        const pts = p.polyline.filter((q) => q.levelId === levelId || q.levelId === null).map((q) => toScreen(v, q.x, q.y));
-        if (pts.length < 2) return null;
-        const flat = pts.flatMap((q) => [q.x, q.y]);
-        const mid = pts[Math.floor(pts.length / 2)]!;
+      {layout.lines.map((p) => {
+        const flat = p.points.flatMap((q) => [q.x, q.y]);
         const strong = highlight === null || highlight === p.rank;
         return (
           <Group key={p.rank} opacity={strong ? 1 : 0.3}>
             <Arrow points={flat} stroke={panel} strokeWidth={6} pointerLength={10} pointerWidth={10} fill={panel} tension={0.2} />
             <Arrow points={flat} stroke={ink} strokeWidth={2.5} dash={p.rank === 1 ? undefined : [8, 5]} pointerLength={9} pointerWidth={9} fill={ink} tension={0.2} />
-            <Circle x={pts[0]!.x} y={pts[0]!.y} radius={4} fill={ink} />
-            <Label x={mid.x + 6} y={mid.y - 24}>
-              <Tag fill={ink} cornerRadius={10} />
-              <Text text={`${p.rank}  ${p.dba.toFixed(0)} dBA`} fontFamily="Work Sans" fontSize={12} fontStyle="600" fill={panel} padding={5} />
-            </Label>
+            <Circle x={p.points[0]!.x} y={p.points[0]!.y} radius={4} fill={ink} />
           </Group>
+        );
+      })}
+    </Group>
+  );
+}
+
+/** Each path's rank and level on a tag beside its line (drawn above the names, which keep clear of them). */
+export function PathTags({ layout, dimmed, highlight }: { layout: PathLayout; dimmed: boolean; highlight: number | null }) {
+  return (
+    <Group listening={false} opacity={dimmed ? 0.35 : 1}>
+      {layout.lines.map((p) => {
+        const box = layout.tags.get(p.rank);
+        if (!box) return null;
+        const strong = highlight === null || highlight === p.rank;
+        return (
+          <Label key={p.rank} x={box.x} y={box.y} opacity={strong ? 1 : 0.3}>
+            <Tag fill={ink} cornerRadius={10} />
+            <Text text={p.text} fontFamily="Work Sans" fontSize={12} fontStyle="600" fill={panel} padding={5} />
+          </Label>
         );
       })}
     </Group>

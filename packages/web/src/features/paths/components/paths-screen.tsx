@@ -15,7 +15,7 @@ import { isApiError } from "../../../lib/api-client";
 import { analysisDrawing, useAnalysis } from "../api/run-analysis";
 import { SHARE_LEGEND, shareColour } from "../model/share-scale";
 import { AnalysisInputs, defaultInputs, toAnalysisTarget, type PathInputs } from "./analysis-inputs";
-import { ShareOverlay, PathLines } from "./analysis-overlay";
+import { ShareOverlay, PathLines, PathTags, pathLayout, type PathLayout } from "./analysis-overlay";
 import { ResultSummary, PathsList } from "./result-summary";
 import { SpectrumChart } from "./spectrum-chart";
 import { WeakLinksList } from "./weak-links-list";
@@ -71,6 +71,15 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
   const result = analysis.data;
   const recomputing = analysis.isFetching;
   const stale = analysis.isPlaceholderData || recomputing;
+  // The paths' lines and tags at the view the canvas draws, worked out once per view.
+  const layoutAt = useMemo(() => {
+    if (!result) return undefined;
+    let last: { view: Viewport; layout: PathLayout } | undefined;
+    return (view: Viewport) => {
+      if (last?.view !== view) last = { view, layout: pathLayout(plan, result, levelId, view) };
+      return last.layout;
+    };
+  }, [plan, result, levelId]);
 
   const envRef = useRef<ToolEnv>({ store, levelId, unit: plan.displayUnit, gridM: 0, toleranceM: 0.2 });
   Object.assign(envRef.current, { levelId, toleranceM: 12 / viewport.scale, pan: (d: { x: number; y: number }) => moveView((v) => ({ ...v, ox: v.ox + d.x * v.scale, oy: v.oy - d.y * v.scale })) });
@@ -143,7 +152,9 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
               cursor="grab"
               roomNamesFirst
               overlay={result ? <ShareOverlay plan={plan} levelId={levelId} elements={result.elements} scale={viewport.scale} dimmed={stale} /> : null}
-              overlayLabels={result ? (drawnView) => <PathLines result={result} levelId={levelId} v={drawnView} dimmed={stale} highlight={highlight} /> : undefined}
+              overlayUnderLabels={layoutAt ? (drawnView) => <PathLines layout={layoutAt(drawnView)} dimmed={stale} highlight={highlight} /> : undefined}
+              overlayLabels={layoutAt ? (drawnView) => <PathTags layout={layoutAt(drawnView)} dimmed={stale} highlight={highlight} /> : undefined}
+              {...(layoutAt ? { keepClearPx: (drawnView: Viewport) => layoutAt(drawnView).tagBoxes } : {})}
             />
           </div>
           <div className="flex shrink-0 flex-wrap items-center gap-x-3 gap-y-1 border-t border-rule bg-panel px-2 py-1 text-[12px]" aria-label="Colour legend">

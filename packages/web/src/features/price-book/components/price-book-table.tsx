@@ -5,6 +5,7 @@ import {
 import { useMemo, useState } from "react";
 import { z } from "zod";
 import { isApiError } from "../../../lib/api-client";
+import { NARROW, useMediaQuery } from "../../../lib/use-media-query";
 import { useUpdatePriceBookItem } from "../api/price-book";
 import { EditableCell } from "./editable-cell";
 import { familyLabels, flagLabels, formatMoney } from "./money";
@@ -32,6 +33,7 @@ export function PriceBookTable({ items, currency, editable }: { items: PriceBook
   const [filter, setFilter] = useState("");
   const [family, setFamily] = useState("");
   const update = useUpdatePriceBookItem();
+  const narrow = useMediaQuery(NARROW);
   const save = (id: string, patch: Partial<PriceBookItemInput>) =>
     update.mutateAsync({ id, patch }).then(() => undefined).catch((e: unknown) => {
       throw new Error(isApiError(e) ? (e.fieldIssues[0]?.message ?? e.message) : "Not saved.");
@@ -100,8 +102,10 @@ export function PriceBookTable({ items, currency, editable }: { items: PriceBook
             {Object.entries(familyLabels).map(([k, v]) => <option key={k} value={k}>{v}</option>)}
           </select>
         </label>
+        {narrow ? <SortChoice table={table} /> : null}
         <p className="text-sm text-muted">{table.getRowModel().rows.length} of {items.length} · prices in {currency}{editable ? " · click a value to change it" : ""}</p>
       </div>
+      {narrow ? <ItemCards table={table} editable={editable} /> : (
       <div className="overflow-x-auto rounded-lg border border-rule bg-panel">
         <table className="w-full min-w-[1280px] text-sm tabular-nums">
           <thead>
@@ -129,7 +133,60 @@ export function PriceBookTable({ items, currency, editable }: { items: PriceBook
           </tbody>
         </table>
       </div>
+      )}
       <p className="text-xs text-muted">Example: a 10 m² wall with “{formatMoney(14, currency)}/m² materials + {formatMoney(22, currency)}/m² labour + {formatMoney(120, currency)} fixed labour” costs {formatMoney(14 * 10 + 22 * 10 + 120, currency)}.</p>
     </div>
+  );
+}
+
+type ItemTable = ReturnType<typeof useReactTable<PriceBookItem>>;
+
+/** On a phone the column headers are out of sight, so the order is a choice of its own. */
+function SortChoice({ table }: { table: ItemTable }) {
+  const sorted = table.getState().sorting[0];
+  const value = sorted ? `${sorted.id}:${sorted.desc ? "desc" : "asc"}` : "";
+  const sortable = table.getAllLeafColumns().filter((c) => c.getCanSort());
+  return (
+    <label className="flex flex-col gap-1 text-sm font-medium">
+      Order by
+      <select className="min-h-11 rounded-md border border-rule bg-panel px-3" value={value} onChange={(e) => {
+        const [id, dir] = e.target.value.split(":");
+        table.setSorting(id ? [{ id, desc: dir === "desc" }] : []);
+      }}>
+        {sortable.flatMap((c) => {
+          const header = typeof c.columnDef.header === "string" ? c.columnDef.header : c.id;
+          return [<option key={`${c.id}:asc`} value={`${c.id}:asc`}>{header} ▲</option>, <option key={`${c.id}:desc`} value={`${c.id}:desc`}>{header} ▼</option>];
+        })}
+      </select>
+    </label>
+  );
+}
+
+/**
+ * The same rows as the table, one card each, for widths where thirteen columns cannot fit: the
+ * name on top, then each value under its column's name, edited in place as in the table. A
+ * reader who cannot edit is not shown the costs that do not apply (zero).
+ */
+function ItemCards({ table, editable }: { table: ItemTable; editable: boolean }) {
+  return (
+    <ul className="flex flex-col gap-2" aria-label="Upgrades">
+      {table.getRowModel().rows.map((r) => {
+        const [name, ...cells] = r.getVisibleCells();
+        const rest = editable ? cells : cells.filter((c) => c.getValue() !== 0 && c.getValue() !== "");
+        return (
+          <li key={r.id} className={`rounded-lg border border-rule bg-panel p-3 text-sm tabular-nums ${r.original.active ? "" : "text-muted"}`}>
+            <div className="text-[15px] font-medium">{name ? flexRender(name.column.columnDef.cell, name.getContext()) : null}</div>
+            <dl className="mt-2 grid grid-cols-[auto_1fr] items-baseline gap-x-3 gap-y-1">
+              {rest.map((c) => (
+                <div key={c.id} className="contents">
+                  <dt className="text-muted">{typeof c.column.columnDef.header === "string" ? c.column.columnDef.header : c.column.id}</dt>
+                  <dd className="min-w-0 break-words">{flexRender(c.column.columnDef.cell, c.getContext())}</dd>
+                </div>
+              ))}
+            </dl>
+          </li>
+        );
+      })}
+    </ul>
   );
 }
