@@ -70,6 +70,9 @@ describe("bringing a CAD drawing into the Sketch", () => {
     await page.getByRole("button", { name: "Export" }).click();
     await page.getByRole("button", { name: "Import DXF…" }).click();
     const dialog = page.getByRole("dialog", { name: "Bring in a CAD drawing" });
+    // The menu steps aside for the dialog instead of staying open behind it.
+    await dialog.waitFor();
+    expect(await page.getByRole("button", { name: "Plan document (JSON)" }).isVisible()).toBe(false);
     await dialog.locator('input[type="file"]').setInputFiles({ name: "band-rooms.dxf", mimeType: "application/dxf", buffer: Buffer.from(twoRoomDxf(), "latin1") });
     // The worker read the layers; the names are guessed and the surveyor corrects them.
     await dialog.getByLabel("Layer A-WALL").waitFor({ timeout: 20_000 });
