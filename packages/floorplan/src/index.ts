@@ -64,6 +64,9 @@ export { leakAreasM2, CRACKED_SEAL_GAP_MM } from "./builder/wall-parts.js";
 export { ductAttenuationParts, endReflectionDb, LINED_DUCT_DB_PER_M, BARE_DUCT_DB_PER_M, BEND_DB } from "./builder/ducts.js";
 export { NEIGHBOUR_DEFAULTS } from "./builder/spaces.js";
 export { mapResultToPlan } from "./result/map-result.js";
+export { CollisionGrid, overlaps, type LabelBox } from "./result/label-grid.js";
+export { placePathTags, pointAlongPolyline, type PathTagInput } from "./result/path-tags.js";
+export { SHARE_COLOURS, SHARE_EDGES, SHARE_LEGEND, shareBin, shareColour, sharePercent } from "./result/share-scale.js";
 export type { ElementResult, PathOnPlan, PathStep, PathPoint, PlanResult, SolveResultLike } from "./result/types.js";
 
 // Demo plans and synthetic buildings

@@ -3,7 +3,7 @@ import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import type supertest from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { constructionCatalogue, generateSyntheticBuilding, serializePlan } from "@hushmark/floorplan";
+import { SHARE_LEGEND, constructionCatalogue, generateSyntheticBuilding, serializePlan } from "@hushmark/floorplan";
 import { evaluateScenario } from "../src/scenarios/scenario-evaluate.js";
 import { PDFParse } from "pdf-parse";
 import { addMember, newFirm, startHarness, type Harness } from "./harness.js";
@@ -194,6 +194,12 @@ describe("the analysis API", () => {
       expect(text).toContain(`about ${(Math.round(asJson.receiver.dba * 10) / 10).toFixed(1)} dBA`);
       expect(text).toContain(asJson.paths[0].label.replace(/\s+/g, " ").slice(0, 20));
       expect(text).toContain("Predictions are estimates");
+      // The target in the trade's words, the app's legend, and no share written above all of it.
+      expect(text).toContain(`target of NC 25`);
+      // The strongest path is drawn on the plan with its tag: rank and level.
+      expect(text).toContain(`1 ${Math.round(asJson.paths[0].dba)} dBA`);
+      for (const l of SHARE_LEGEND) expect(text).toContain(l.label);
+      for (const m of text.matchAll(/(\d+) ?%/g)) expect(Number(m[1]), m[0]).toBeLessThanOrEqual(100);
     }
   });
 

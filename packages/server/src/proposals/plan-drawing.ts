@@ -4,25 +4,13 @@
  * same colours, and numbered markers on the upgraded elements.
  */
 import { applyAction, solveNetwork, type UpgradeOption } from "@hushmark/acoustics";
-import { elementsOfType, mapResultToPlan, polygonCentroid } from "@hushmark/floorplan";
+import { SHARE_LEGEND, elementsOfType, mapResultToPlan, placePathTags, polygonCentroid, shareColour, sharePercent, type LabelBox } from "@hushmark/floorplan";
 import type PDFDocument from "pdfkit";
 import type { PreparedNetwork } from "../analyses/compute.js";
 
 type Doc = InstanceType<typeof PDFDocument>;
 
 type Prepared = Extract<PreparedNetwork, { ok: true }>;
-
-/** The sound-path colour scale (design.md), with the share each colour starts at. */
-export const SHARE_SCALE: { from: number; colour: string }[] = [
-  { from: 0, colour: "#e8ecef" },
-  { from: 0.02, colour: "#b9d3d6" },
-  { from: 0.05, colour: "#f1c27d" },
-  { from: 0.15, colour: "#e8875a" },
-  { from: 0.3, colour: "#c2412d" },
-  { from: 0.5, colour: "#7a1f3d" },
-];
-
-export const shareColour = (share: number) => [...SHARE_SCALE].reverse().find((s) => share >= s.from)?.colour ?? SHARE_SCALE[0]!.colour;
 
 /** Each element's A-weighted share at the receiver, with the options applied (none: as surveyed). */
 export function elementShares(prepared: Prepared, receiverId: string, options: readonly UpgradeOption[] = []): Map<string, number> {
@@ -39,8 +27,25 @@ export interface DrawBox {
   height: number;
 }
 
-/** Draws the receiver's level of the plan into `box` (PDF points); markers number the upgraded elements. */
-export function drawPlan(doc: Doc, prepared: Prepared, receiverId: string, shares: Map<string, number>, markers: Map<string, number>, box: DrawBox): void {
+/** A path to draw over the plan: its rank and its line through the elements it crosses. */
+export interface DrawnPath {
+  rank: number;
+  dba: number;
+  polyline: readonly { x: number; y: number; levelId: string | null }[];
+}
+
+/** A round length for a scale bar about `target` metres long: 1, 2 or 5 times a power of ten. */
+export function scaleBarMetres(target: number): number {
+  const p = 10 ** Math.floor(Math.log10(Math.max(target, 1e-3)));
+  return [5, 2, 1].map((k) => k * p).find((v) => v <= target) ?? p;
+}
+
+/**
+ * Draws the receiver's level of the plan into `box` (PDF points), with a scale bar; markers
+ * number the upgraded elements, and `paths` (the weakest, strongest first) are drawn as numbered
+ * lines with their level, solid for the strongest and dashed for the rest.
+ */
+export function drawPlan(doc: Doc, prepared: Prepared, receiverId: string, shares: Map<string, number>, markers: Map<string, number>, box: DrawBox, paths: readonly DrawnPath[] = []): void {
   const plan = prepared.plan;
   const rooms = elementsOfType(plan, "room");
   const receiver = rooms.find((r) => r.id === receiverId);
@@ -80,13 +85,60 @@ export function drawPlan(doc: Doc, prepared: Prepared, receiverId: string, share
       doc.circle(x, y, 4.5).fillAndStroke(shareColour(shares.get(id) ?? 0), "#1d2433");
     }
   }
-  doc.fillColor("#1d2433").fontSize(7);
+  // The paths' lines go under the room names; their tags go off the names, after them.
+  const drawn = paths.flatMap((p) => {
+    const pts = p.polyline.filter((q) => q.levelId === levelId || q.levelId === null).map(at);
+    return pts.length < 2 ? [] : [{ ...p, pts }];
+  });
+  for (const p of drawn) {
+    const [first, ...rest] = p.pts;
+    doc.lineWidth(4).strokeColor("#ffffff").undash().moveTo(...first!);
+    for (const q of rest) doc.lineTo(...q);
+    doc.stroke();
+    doc.lineWidth(1.6).strokeColor("#1d2433");
+    if (p.rank === 1) doc.undash(); else doc.dash(5, { space: 3 });
+    doc.moveTo(...first!);
+    for (const q of rest) doc.lineTo(...q);
+    doc.stroke().undash();
+    doc.circle(...first!, 2.5).fill("#1d2433");
+    const end = p.pts[p.pts.length - 1]!, before = p.pts[p.pts.length - 2]!;
+    const angle = Math.atan2(end[1] - before[1], end[0] - before[0]);
+    const head = (a: number): [number, number] => [end[0] - 7 * Math.cos(angle + a), end[1] - 7 * Math.sin(angle + a)];
+    doc.polygon(end, head(0.45), head(-0.45)).fill("#1d2433");
+  }
+  // Room names at their centres, with a halo of the room's own colour so a line under them
+  // does not cut through the letters.
+  const names: LabelBox[] = [];
   for (const room of here) {
     const [x, y] = at(polygonCentroid(room.outline));
     const share = layerShare(room.id);
-    doc.fillColor(share >= 0.3 ? "#ffffff" : "#1d2433").text(room.name, x - 50, y - 4, { width: 100, align: "center" });
-    if (share >= 0.02) doc.fontSize(6).text(`floor/ceiling ${Math.round(share * 100)}%`, x - 50, y + 5, { width: 100, align: "center" }).fontSize(7);
+    const fill = share >= 0.02 ? shareColour(share) : room.id === receiverId ? "#eef6f5" : "#f7f5f0";
+    const ink = share >= 0.3 ? "#ffffff" : "#1d2433";
+    const lines: [string, number, number][] = [[room.name, 7, y - 4]];
+    if (share >= 0.02) lines.push([`floor/ceiling ${sharePercent(share)}`, 6, y + 5]);
+    for (const [text, size, ty] of lines) {
+      doc.fontSize(size).lineWidth(2.2).strokeColor(fill).fillColor(fill).text(text, x - 50, ty, { width: 100, align: "center", stroke: true, fill: false });
+      doc.fillColor(ink).text(text, x - 50, ty, { width: 100, align: "center" });
+    }
+    doc.fontSize(7);
+    const w = Math.min(100, doc.widthOfString(room.name) + 6);
+    names.push({ x: x - w / 2, y: y - 5, w, h: share >= 0.02 ? 19 : 11 });
   }
+  doc.fontSize(7);
+  const tagText = (p: DrawnPath) => `${p.rank}  ${Math.round(p.dba)} dBA`;
+  const tags = placePathTags(drawn.map((p) => ({ rank: p.rank, points: p.pts.map(([x, y]) => ({ x, y })), w: doc.widthOfString(tagText(p)) + 8, h: 11 })), names);
+  for (const p of drawn) {
+    const b = tags.get(p.rank);
+    if (!b) continue;
+    doc.roundedRect(b.x, b.y, b.w, b.h, 5).fill("#1d2433");
+    doc.fillColor("#ffffff").text(tagText(p), b.x + 4, b.y + 2, { lineBreak: false });
+  }
+  // The scale bar, bottom left of the box.
+  const barM = scaleBarMetres((box.width * 0.2) / scale);
+  const barX = box.x, barY = box.y + box.height - 4;
+  doc.lineWidth(1).strokeColor("#1d2433").rect(barX, barY - 4, (barM * scale) / 2, 4).fillAndStroke("#1d2433", "#1d2433");
+  doc.rect(barX + (barM * scale) / 2, barY - 4, (barM * scale) / 2, 4).stroke();
+  doc.fillColor("#1d2433").fontSize(6).text(`0`, barX - 2, barY + 2, { lineBreak: false }).text(`${barM} m`, barX + barM * scale - 6, barY + 2, { lineBreak: false });
   for (const [elementId, n] of markers) {
     const p = markerPoint(prepared, elementId);
     if (!p) continue;
@@ -112,12 +164,10 @@ function markerPoint(prepared: Prepared, elementId: string): { x: number; y: num
 
 /** The colour legend with its share ranges (colour is never alone: numbers beside it). */
 export function drawLegend(doc: Doc, x: number, y: number): void {
-  doc.fontSize(7).fillColor("#6b7080").text("Share of the sound reaching the room:", x, y);
-  SHARE_SCALE.forEach((s, i) => {
-    const next = SHARE_SCALE[i + 1];
-    const label = next ? `${Math.round(s.from * 100)}–${Math.round(next.from * 100)}%` : `${Math.round(s.from * 100)}%+`;
-    const cx = x + i * 62;
+  doc.fontSize(7).fillColor("#6b7080").text("Share of the sound reaching the room (walls, and rooms by their floor or ceiling; dots are doors, windows and openings):", x, y);
+  SHARE_LEGEND.forEach((s, i) => {
+    const cx = x + i * 72;
     doc.rect(cx, y + 11, 10, 8).fillAndStroke(s.colour, "#6b7080");
-    doc.fillColor("#1d2433").text(label, cx + 13, y + 12);
+    doc.fillColor("#1d2433").text(s.label, cx + 13, y + 12);
   });
 }

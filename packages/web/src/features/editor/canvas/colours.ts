@@ -11,8 +11,6 @@ export const good = "#2f8f4e";
 export const caution = "#c98a12";
 export const danger = "#c2412d";
 
-/** The sound-path scale, low share to high. */
-export const pathScale = ["#e8ecef", "#b9d3d6", "#f1c27d", "#e8875a", "#c2412d", "#7a1f3d"] as const;
 
 /** Room fills by kind of use: quiet rooms cool, noisy ones warm, all pale enough for ink on top. */
 export function roomFill(use: string): string {

@@ -1,13 +1,13 @@
-import { elementsOfType, formatArea, polygonAreaM2, polygonCentroid, type Plan } from "@hushmark/floorplan";
+import { SHARE_LEGEND, elementsOfType, formatArea, polygonAreaM2, polygonCentroid, type Plan } from "@hushmark/floorplan";
 import { levelOf, planBounds } from "@hushmark/editor-core";
 import { wallBands, openingSpan } from "../model/wall-geometry";
-import { ink, muted, paper, pathScale, rule } from "../canvas/colours";
+import { ink, muted, paper, rule } from "../canvas/colours";
 import { roomFill } from "../canvas/colours";
 
 /** The analysis drawn onto an export: each element's colour and the legend to explain it. */
 export interface ExportMarkup {
   colours: Record<string, string>;
-  legend: Array<{ colour: string; label: string }>;
+  legend: readonly { colour: string; label: string }[];
   subtitle: string;
 }
 
@@ -115,4 +115,4 @@ export function planToSvg(plan: Plan, levelId: string, options: ExportOptions): 
   return { svg, width, height };
 }
 
-export const DEFAULT_LEGEND = pathScale.map((colour, i) => ({ colour, label: ["under 2 %", "2–5 %", "5–10 %", "10–20 %", "20–40 %", "over 40 %"][i]! }));
+export const DEFAULT_LEGEND = SHARE_LEGEND;

@@ -1,14 +1,12 @@
 import { memo } from "react";
 import { Arrow, Circle, Group, Label, Line, Rect, Tag, Text } from "react-konva";
 import type { AnalysisResult } from "@hushmark/schemas";
-import { elementsOfType, polygonCentroid, type Plan } from "@hushmark/floorplan";
+import { elementsOfType, placePathTags, polygonCentroid, type LabelBox, type Plan } from "@hushmark/floorplan";
 import { levelOf } from "@hushmark/editor-core";
 import { openingSpan, wallBands } from "../../editor/model/wall-geometry";
 import { toScreen, type Viewport } from "../../editor/model/viewport";
 import { shareColour } from "../model/share-scale";
 import { overlayTarget } from "../model/overlay-target";
-import { placePathTags } from "../model/path-tags";
-import type { LabelBox } from "../../editor/canvas/label-layout";
 import { ink, panel } from "../../editor/canvas/colours";
 
 type Elements = AnalysisResult["elements"];

@@ -1,7 +1,5 @@
-import type { AnalysisResult } from "@hushmark/schemas";
+import { targetText, type AnalysisResult } from "@hushmark/schemas";
 import { levelInWords, shortfallInWords } from "../model/plain-language";
-
-const targetText = (t: NonNullable<AnalysisResult["target"]>) => (t.kind === "nc" ? `NC ${t.value}` : t.kind === "dba" ? `${t.value} dBA` : `${t.value} dB quieter`);
 
 /** The headline: what reaches the receiver, as figures for staff and in words for the client. */
 export function ResultSummary({ result, plain }: { result: AnalysisResult; plain: boolean }) {

@@ -1,9 +1,9 @@
-import { CollisionGrid, type LabelBox } from "../../editor/canvas/label-layout";
+import { CollisionGrid, type LabelBox } from "./label-grid.js";
 
 type Point = { x: number; y: number };
 
 /** The point a fraction `t` (0–1) of the way along a polyline, by length. */
-export function pointAlong(points: readonly Point[], t: number): Point {
+export function pointAlongPolyline(points: readonly Point[], t: number): Point {
   const lengths = points.slice(1).map((p, i) => Math.hypot(p.x - points[i]!.x, p.y - points[i]!.y));
   const total = lengths.reduce((a, b) => a + b, 0);
   if (points.length < 2 || total === 0) return points[0] ?? { x: 0, y: 0 };
@@ -45,14 +45,14 @@ export function placePathTags(paths: readonly PathTagInput[], avoid: readonly La
     if (p.points.length < 2) continue;
     let chosen: LabelBox | undefined;
     for (const t of ALONG) {
-      const at = pointAlong(p.points, t);
+      const at = pointAlongPolyline(p.points, t);
       const right = { x: at.x + 6, y: at.y - p.h - 4, w: p.w, h: p.h };
       const left = { x: at.x - 6 - p.w, y: at.y - p.h - 4, w: p.w, h: p.h };
       chosen = [right, left].find((b) => grid.place(b, 3));
       if (chosen) break;
     }
     if (!chosen) {
-      const at = pointAlong(p.points, 0.5);
+      const at = pointAlongPolyline(p.points, 0.5);
       chosen = { x: at.x + 6, y: at.y - p.h - 4, w: p.w, h: p.h };
     }
     out.set(p.rank, chosen);

@@ -1,14 +1,14 @@
 import { describe, expect, it } from "vitest";
-import { overlaps } from "../../editor/canvas/label-layout";
-import { placePathTags, pointAlong } from "./path-tags";
+import { overlaps } from "./label-grid.js";
+import { placePathTags, pointAlongPolyline } from "./path-tags.js";
 
 describe("path tags", () => {
   it("finds points along a polyline by length", () => {
     const line = [{ x: 0, y: 0 }, { x: 10, y: 0 }, { x: 10, y: 30 }];
-    expect(pointAlong(line, 0)).toEqual({ x: 0, y: 0 });
-    expect(pointAlong(line, 0.25)).toEqual({ x: 10, y: 0 });
-    expect(pointAlong(line, 0.5)).toEqual({ x: 10, y: 10 });
-    expect(pointAlong(line, 1)).toEqual({ x: 10, y: 30 });
+    expect(pointAlongPolyline(line, 0)).toEqual({ x: 0, y: 0 });
+    expect(pointAlongPolyline(line, 0.25)).toEqual({ x: 10, y: 0 });
+    expect(pointAlongPolyline(line, 0.5)).toEqual({ x: 10, y: 10 });
+    expect(pointAlongPolyline(line, 1)).toEqual({ x: 10, y: 30 });
   });
 
   it("keeps tags off room names and off each other, and keeps the middle when nothing else is free", () => {
