@@ -90,7 +90,8 @@ export function drawPlan(doc: Doc, prepared: Prepared, receiverId: string, share
     const pts = p.polyline.filter((q) => q.levelId === levelId || q.levelId === null).map(at);
     return pts.length < 2 ? [] : [{ ...p, pts }];
   });
-  for (const p of drawn) {
+  // The strongest path last, on top where paths share a stretch.
+  for (const p of [...drawn].reverse()) {
     const [first, ...rest] = p.pts;
     doc.lineWidth(4).strokeColor("#ffffff").undash().moveTo(...first!);
     for (const q of rest) doc.lineTo(...q);

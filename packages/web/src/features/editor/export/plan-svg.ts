@@ -1,4 +1,4 @@
-import { SHARE_LEGEND, elementsOfType, formatArea, polygonAreaM2, polygonCentroid, type Plan } from "@hushmark/floorplan";
+import { SHARE_LEGEND, elementsOfType, formatArea, placePathTags, polygonAreaM2, polygonCentroid, type LabelBox, type Plan } from "@hushmark/floorplan";
 import { levelOf, planBounds } from "@hushmark/editor-core";
 import { wallBands, openingSpan } from "../model/wall-geometry";
 import { ink, muted, paper, rule } from "../canvas/colours";
@@ -9,6 +9,8 @@ export interface ExportMarkup {
   colours: Record<string, string>;
   legend: readonly { colour: string; label: string }[];
   subtitle: string;
+  /** The weakest paths to draw, strongest first: rank, level at the receiver, line in plan metres. */
+  paths?: readonly { rank: number; dba: number; polyline: readonly { x: number; y: number; levelId: string | null }[] }[];
 }
 
 export interface ExportOptions {
@@ -55,6 +57,13 @@ export function planToSvg(plan: Plan, levelId: string, options: ExportOptions): 
     if (r.levelId !== levelId || r.outline.length < 3) continue;
     parts.push(`<polygon points="${r.outline.map((p) => `${n(X(p.x))},${n(Y(p.y))}`).join(" ")}" fill="${roomFill(r.use)}"/>`);
   }
+  // A floor or ceiling (`upper^lower`) tints its room on this level, as on the canvas.
+  for (const [id, colour] of Object.entries(colours)) {
+    if (!id.includes("^")) continue;
+    const room = id.split("^").map((part) => plan.elements[part]).find((e) => e?.type === "room" && e.levelId === levelId);
+    if (room?.type !== "room") continue;
+    parts.push(`<polygon points="${room.outline.map((p) => `${n(X(p.x))},${n(Y(p.y))}`).join(" ")}" fill="${colour}" fill-opacity="0.4"/>`);
+  }
   for (const band of wallBands(plan)) {
     if (band.levelId !== levelId) continue;
     parts.push(`<line x1="${n(X(band.start.x))}" y1="${n(Y(band.start.y))}" x2="${n(X(band.end.x))}" y2="${n(Y(band.end.y))}" stroke="${colours[band.id] ?? ink}" stroke-width="${n(band.thicknessM * k)}" stroke-linecap="square"/>`);
@@ -85,11 +94,37 @@ export function planToSvg(plan: Plan, levelId: string, options: ExportOptions): 
     const x = X(v.position.x), y = Y(v.position.y), s = 0.3 * k;
     parts.push(`<rect x="${n(x - s / 2)}" y="${n(y - s / 2)}" width="${n(s)}" height="${n(s)}" fill="${colours[v.id] ?? "#ffffff"}" stroke="${ink}"/><line x1="${n(x - s / 2)}" y1="${n(y + s / 2)}" x2="${n(x + s / 2)}" y2="${n(y - s / 2)}" stroke="${ink}"/>`);
   }
+  // The paths' lines under the names; names with a halo; the tags placed off the names.
+  const drawn = (options.markup?.paths ?? []).flatMap((p) => {
+    const pts = p.polyline.filter((q) => q.levelId === levelId || q.levelId === null).map((q) => ({ x: X(q.x), y: Y(q.y) }));
+    return pts.length < 2 ? [] : [{ ...p, pts }];
+  });
+  // The strongest path last, on top where paths share a stretch.
+  for (const p of [...drawn].reverse()) {
+    const d = p.pts.map((q, i) => `${i ? "L" : "M"}${n(q.x)},${n(q.y)}`).join(" ");
+    parts.push(`<path d="${d}" fill="none" stroke="#ffffff" stroke-width="6" stroke-linejoin="round"/>`);
+    parts.push(`<path d="${d}" fill="none" stroke="${ink}" stroke-width="2.5" stroke-linejoin="round"${p.rank === 1 ? "" : ` stroke-dasharray="8 5"`}/>`);
+    const end = p.pts[p.pts.length - 1]!, before = p.pts[p.pts.length - 2]!;
+    const angle = Math.atan2(end.y - before.y, end.x - before.x);
+    const head = (a: number) => `${n(end.x - 10 * Math.cos(angle + a))},${n(end.y - 10 * Math.sin(angle + a))}`;
+    parts.push(`<circle cx="${n(p.pts[0]!.x)}" cy="${n(p.pts[0]!.y)}" r="4" fill="${ink}"/><polygon points="${n(end.x)},${n(end.y)} ${head(0.45)} ${head(-0.45)}" fill="${ink}"/>`);
+  }
+  const names: LabelBox[] = [];
   for (const r of elementsOfType(plan, "room")) {
     if (r.levelId !== levelId || r.outline.length < 3) continue;
     const c = polygonCentroid(r.outline);
-    parts.push(`<text x="${n(X(c.x))}" y="${n(Y(c.y) - 2)}" text-anchor="middle" font-family="Work Sans, sans-serif" font-size="13" font-weight="600" fill="${ink}">${esc(r.name)}</text>`);
-    parts.push(`<text x="${n(X(c.x))}" y="${n(Y(c.y) + 14)}" text-anchor="middle" font-family="Work Sans, sans-serif" font-size="11" fill="${muted}">${esc(formatArea(polygonAreaM2(r.outline), plan.displayUnit))}</text>`);
+    const halo = drawn.length ? ` stroke="#ffffff" stroke-width="3.5" stroke-linejoin="round" paint-order="stroke"` : "";
+    parts.push(`<text x="${n(X(c.x))}" y="${n(Y(c.y) - 2)}" text-anchor="middle" font-family="Work Sans, sans-serif" font-size="13" font-weight="600" fill="${ink}"${halo}>${esc(r.name)}</text>`);
+    parts.push(`<text x="${n(X(c.x))}" y="${n(Y(c.y) + 14)}" text-anchor="middle" font-family="Work Sans, sans-serif" font-size="11" fill="${muted}"${halo}>${esc(formatArea(polygonAreaM2(r.outline), plan.displayUnit))}</text>`);
+    const w = r.name.length * 7.6 + 8;
+    names.push({ x: X(c.x) - w / 2, y: Y(c.y) - 16, w, h: 34 });
+  }
+  const tagText = (p: { rank: number; dba: number }) => `${p.rank}  ${Math.round(p.dba)} dBA`;
+  const tags = placePathTags(drawn.map((p) => ({ rank: p.rank, points: p.pts, w: tagText(p).length * 7 + 10, h: 22 })), names);
+  for (const p of drawn) {
+    const t = tags.get(p.rank);
+    if (!t) continue;
+    parts.push(`<rect x="${n(t.x)}" y="${n(t.y)}" width="${n(t.w)}" height="${t.h}" rx="10" fill="${ink}"/><text x="${n(t.x + 5)}" y="${n(t.y + 15)}" font-family="Work Sans, sans-serif" font-size="12" font-weight="600" fill="#ffffff" xml:space="preserve">${esc(tagText(p))}</text>`);
   }
   // Title block along the bottom.
   const ty = height - blockH + 10;

@@ -103,11 +103,11 @@ export function pathLayout(plan: Plan, result: AnalysisResult, levelId: string, 
   return { lines, tags, tagBoxes: [...tags.values()] };
 }
 
-/** The weakest paths' lines, numbered by rank (drawn under the room names). */
+/** The weakest paths' lines, numbered by rank (drawn under the room names; the strongest on top where they share a stretch). */
 export function PathLines({ layout, dimmed, highlight }: { layout: PathLayout; dimmed: boolean; highlight: number | null }) {
   return (
     <Group listening={false} opacity={dimmed ? 0.35 : 1}>
-      {layout.lines.map((p) => {
+      {[...layout.lines].reverse().map((p) => {
         const flat = p.points.flatMap((q) => [q.x, q.y]);
         const strong = highlight === null || highlight === p.rank;
         return (

@@ -115,7 +115,7 @@ export function PathsScreen({ projectId, response, title, plain, canEdit }: { pr
   };
 
   const problems = isApiError(analysis.error) && analysis.error.status === 422 ? (analysis.error.details as Array<{ message: string; elementId?: string | null }> | undefined) ?? [] : null;
-  const markup = result ? { colours: Object.fromEntries(result.elements.map((e) => [e.elementId, shareColour(e.share)])), legend: SHARE_LEGEND, subtitle: `${result.source.name} → ${result.receiver.name}: ${result.receiver.dba.toFixed(0)} dBA` } : undefined;
+  const markup = result ? { colours: Object.fromEntries(result.elements.map((e) => [e.elementId, shareColour(e.share)])), legend: SHARE_LEGEND, subtitle: `${result.source.name} → ${result.receiver.name}: ${result.receiver.dba.toFixed(0)} dBA`, paths: result.paths.slice(0, 3) } : undefined;
 
   if (!inputs) return <p className="rounded-lg border border-rule bg-panel p-6 text-[15px]">Draw at least two rooms in Sketch to see where the sound gets through.</p>;
 
