@@ -189,6 +189,10 @@ describe("from scenario to paid deposit", () => {
     expect(report.status).toBe(200);
     const text = await pdfText(report.body as Buffer);
     expect(text).toContain(`Measured drop: ${v.body.measuredGainDb} dB`);
+    // The octave-band figures under the chart: 63 Hz is the energy sum of 50, 63 and 80 Hz.
+    const octave63 = 10 * Math.log10(before.slice(0, 3).reduce((s, l) => s + 10 ** (l / 10), 0));
+    expect(text).toMatch(new RegExp(`Measured before\\s+${octave63.toFixed(1)}`));
+    expect(text).toMatch(new RegExp(`Measured after\\s+${(octave63 - 9).toFixed(1)}`));
   });
 });
 

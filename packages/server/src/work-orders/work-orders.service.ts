@@ -142,7 +142,7 @@ export function createWorkOrdersService(dataSource: DataSource, deps: { projects
     const files = deps.files;
     let file = found.row.reportFileId ? await dataSource.getRepository(StoredFile).findOneBy({ id: found.row.reportFileId }) : null;
     if (!file) {
-      const made = await files.store({ organizationId: found.row.organizationId, userId: null }, projectId, files.fromBuffer(await renderClosingReport(found.dto, found.content), { contentType: "application/pdf", originalName: filename }));
+      const made = await files.store({ organizationId: found.row.organizationId, userId: null }, projectId, files.fromBuffer(await renderClosingReport(found.dto, found.content, { before: found.row.beforeLevelsDb, after: found.row.afterLevelsDb }), { contentType: "application/pdf", originalName: filename }));
       const taken = await dataSource.getRepository(VerificationRow).createQueryBuilder().update().set({ reportFileId: made.id }).where("id = :id AND report_file_id IS NULL", { id: verificationId }).execute();
       if (taken.affected === 0) {
         await (await dataSource.transaction((m) => files.remove(m, made)))();
