@@ -10,6 +10,8 @@ import { formatDateTime } from "../../lib/format";
 import { useCurrentMe } from "../auth/components/use-current-me";
 import { levelWords } from "../price-book/components/money";
 import { useProjectProposals } from "../proposals/api/proposals";
+import { useMeasurements } from "../measurements/api/measurements";
+import type { Measurement } from "@hushmark/schemas";
 import { reportUrl, useAddVerification, useVerifications } from "./api/verifications";
 
 /** Parses 21 band levels typed or pasted with commas, spaces or new lines. */
@@ -18,6 +20,16 @@ export function parseBands(text: string): number[] | string {
   if (values.some((v) => !Number.isFinite(v))) return "Use numbers only, separated by commas or spaces.";
   if (values.length !== 21) return `Give 21 one-third-octave levels from 50 to 5000 Hz (you gave ${values.length}).`;
   return values;
+}
+
+/** Measurements with a level in every one of the 21 bands, which can stand for before or after. */
+export function fullSpectra(measurements: readonly Measurement[]): { id: string; label: string; kind: Measurement["kind"]; levels: number[] }[] {
+  return measurements.flatMap((m) => {
+    if (m.status !== "ready" || m.leqDb.length !== 21 || m.leqDb.some((v) => v === null)) return [];
+    const when = formatDateTime(m.takenAt);
+    const laeq = m.summary?.laeqDb;
+    return [{ id: m.id, kind: m.kind, label: `${m.label} · ${when}${laeq != null ? ` · ${laeq.toFixed(1)} dBA` : ""}`, levels: m.leqDb as number[] }];
+  });
 }
 
 /** Verify: measured before and after the work against the prediction and the target, with the closing report. */
@@ -68,6 +80,7 @@ function RecordForm({ projectId, proposals }: { projectId: string; proposals: { 
   const [note, setNote] = useState("");
   const [error, setError] = useState<string | null>(null);
   const add = useAddVerification(projectId);
+  const spectra = fullSpectra(useMeasurements(projectId).data ?? []);
   if (proposals.length === 0) return <p className="text-sm text-muted">Record the after-work measurement once a proposal's deposit is paid.</p>;
   const submit = () => {
     const b = parseBands(before), a = parseBands(after);
@@ -78,17 +91,13 @@ function RecordForm({ projectId, proposals }: { projectId: string; proposals: { 
   };
   return (
     <Card>
-      <CardHeader title="Record the after-work measurement" description="Band levels (dB, 50 to 5000 Hz) at the quiet room with the same source running, before and after the work." />
+      <CardHeader title="Record the after-work measurement" description="Band levels (dB, 50 to 5000 Hz) at the quiet room with the same source running, before and after the work: pick a measurement from Measure, or type or paste 21 levels." />
       <div className="flex flex-col gap-3 p-5">
         <label className="flex max-w-md flex-col gap-1 text-sm font-medium">Proposal
           <select className="min-h-11 rounded-md border border-rule bg-panel px-3" value={proposalId} onChange={(e) => setProposalId(e.target.value)}>{proposals.map((p) => <option key={p.id} value={p.id}>{p.title}</option>)}</select>
         </label>
-        <label className="flex flex-col gap-1 text-sm font-medium">Before (21 levels)
-          <textarea className="min-h-16 rounded-md border border-rule bg-panel p-3 font-mono text-sm" value={before} onChange={(e) => setBefore(e.target.value)} />
-        </label>
-        <label className="flex flex-col gap-1 text-sm font-medium">After (21 levels)
-          <textarea className="min-h-16 rounded-md border border-rule bg-panel p-3 font-mono text-sm" value={after} onChange={(e) => setAfter(e.target.value)} />
-        </label>
+        <BandsField label="Before" value={before} onChange={setBefore} spectra={first(spectra, ["before_work", "receiver_side"])} />
+        <BandsField label="After" value={after} onChange={setAfter} spectra={first(spectra, ["after_work"])} />
         <label className="flex flex-col gap-1 text-sm font-medium">Note
           <textarea className="min-h-16 rounded-md border border-rule bg-panel p-3 text-[15px]" value={note} onChange={(e) => setNote(e.target.value)} />
         </label>
@@ -96,5 +105,32 @@ function RecordForm({ projectId, proposals }: { projectId: string; proposals: { 
         <div><Button pending={add.isPending} onClick={submit}>Compare and save</Button></div>
       </div>
     </Card>
+  );
+}
+
+/** The measurements of the kinds that usually stand for this side first, the rest after them. */
+const first = <T extends { kind: string }>(list: T[], kinds: string[]) => [...list.filter((m) => kinds.includes(m.kind)), ...list.filter((m) => !kinds.includes(m.kind))];
+
+/** 21 band levels, typed or pasted, or filled in from one of the project's measurements. */
+export function BandsField({ label, value, onChange, spectra }: { label: string; value: string; onChange: (v: string) => void; spectra: { id: string; label: string; levels: number[] }[] }) {
+  const [picked, setPicked] = useState("");
+  return (
+    <fieldset className="flex flex-col gap-1">
+      <legend className="text-sm font-medium">{label} (21 levels)</legend>
+      {spectra.length ? (
+        <label className="flex max-w-xl flex-col gap-1 text-sm">
+          <span className="text-muted">From a measurement</span>
+          <select aria-label={`${label}: from a measurement`} className="min-h-11 rounded-md border border-rule bg-panel px-3" value={picked} onChange={(e) => {
+            setPicked(e.target.value);
+            const m = spectra.find((x) => x.id === e.target.value);
+            if (m) onChange(m.levels.map((v) => v.toFixed(1)).join(" "));
+          }}>
+            <option value="">Type or paste below</option>
+            {spectra.map((m) => <option key={m.id} value={m.id}>{m.label}</option>)}
+          </select>
+        </label>
+      ) : null}
+      <textarea aria-label={`${label} (21 levels)`} className="min-h-16 rounded-md border border-rule bg-panel p-3 font-mono text-sm" value={value} onChange={(e) => { setPicked(""); onChange(e.target.value); }} />
+    </fieldset>
   );
 }
