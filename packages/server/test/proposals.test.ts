@@ -2,6 +2,7 @@ import { PDFParse } from "pdf-parse";
 import Stripe from "stripe";
 import type supertest from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { advanceProjectStage } from "../src/projects/project-stage.js";
 import { addMember } from "./harness.js";
 import { pricedProject, SETUP, startMoneyHarness, until, WEBHOOK_SECRET, type MoneyHarness } from "./money-harness.js";
 
@@ -19,6 +20,8 @@ describe("from scenario to paid deposit", () => {
   let p: Awaited<ReturnType<typeof pricedProject>>;
   let scenarioId: string;
   let proposalId: string;
+  /** The project's stage as the firm's project list shows it. */
+  const stage = async () => (await p.owner.get(`/api/v1/projects/${p.projectId}`)).body.status as string;
 
   beforeAll(async () => {
     h = await startMoneyHarness();
@@ -71,6 +74,7 @@ describe("from scenario to paid deposit", () => {
     const sent = await p.planner.post(`/api/v1/proposals/${proposalId}/send`).send({});
     expect(sent.status, JSON.stringify(sent.body)).toBe(200);
     expect(sent.body.status).toBe("sent");
+    expect(await stage()).toBe("proposal");
     const link = await until("the proposal mail", async () => h.mail.messages().find((m) => m.to.includes(p.client.email) && m.subject.includes("proposal"))?.links.find((l) => l.includes("/portal/proposals/")));
     expect(link).toBe(`${h.baseUrl}/portal/proposals/${proposalId}`);
     const id = link.split("/").pop()!;
@@ -101,6 +105,7 @@ describe("from scenario to paid deposit", () => {
     const approved = await c.post(`/api/v1/proposals/${proposalId}/approve`).send({ version: 2, comment: "Go ahead." });
     expect(approved.status, JSON.stringify(approved.body)).toBe(200);
     expect(approved.body.status).toBe("approved");
+    expect(await stage()).toBe("approved");
     expect(approved.body.approvedBy).toBe("A client");
     expect(Date.now() - Date.parse(approved.body.approvedAt)).toBeLessThan(60_000);
     expect(approved.body.comments.map((k: { kind: string }) => k.kind)).toEqual(["comment", "changes_asked", "approved"]);
@@ -173,6 +178,7 @@ describe("from scenario to paid deposit", () => {
     const t = moved.body.workOrders[0].tasks[0];
     expect(t).toMatchObject({ status: "done", assigneeName: "A surveyor" });
     expect((await p.client.agent.get(`/api/v1/proposals/${proposalId}`)).body.status).toBe("in_progress");
+    expect(await stage()).toBe("in_progress");
     expect((await p.client.agent.patch(`/api/v1/work-order-tasks/${task.id}`).send({ status: "todo" })).status).toBe(403);
 
     const before = Array.from({ length: 21 }, (_, i) => 48 - i * 0.5);
@@ -181,6 +187,15 @@ describe("from scenario to paid deposit", () => {
     expect(v.status, JSON.stringify(v.body)).toBe(201);
     expect(v.body.measuredGainDb).toBeCloseTo(9, 1);
     expect((await p.client.agent.get(`/api/v1/proposals/${proposalId}`)).body.status).toBe("verified");
+    expect(await stage()).toBe("verified");
+    // Forward only: a project set back by hand is not pulled past where the firm put it, and one
+    // further on is not pulled back by a later proposal's step.
+    await h.dataSource.query("UPDATE projects SET status = 'archived' WHERE id = $1", [p.projectId]);
+    await h.dataSource.transaction((m) => advanceProjectStage(m, p.projectId, "proposal"));
+    expect(await stage()).toBe("archived");
+    await h.dataSource.query("UPDATE projects SET status = 'verified' WHERE id = $1", [p.projectId]);
+    await h.dataSource.transaction((m) => advanceProjectStage(m, p.projectId, "approved"));
+    expect(await stage()).toBe("verified");
     const report = await p.client.agent.get(`/api/v1/projects/${p.projectId}/verifications/${v.body.id}/report`).buffer(true).parse((res, cb) => {
       const chunks: Buffer[] = [];
       res.on("data", (d: Buffer) => chunks.push(d));

@@ -19,6 +19,7 @@ import { planShares, sharesRecord } from "./plan-shares.js";
 import { proposalContent } from "./proposal-content.js";
 import { ProposalVersionRow } from "./proposal-version.entity.js";
 import { ProposalRow } from "./proposal.entity.js";
+import { advanceProjectStage } from "../projects/project-stage.js";
 
 export interface ProposalHooks {
   /** Queues the PDF of a version (a background job). */
@@ -160,6 +161,7 @@ export function createProposalsService(dataSource: DataSource, deps: { projects:
     await dataSource.transaction(async (m) => {
       await m.getRepository(ProposalVersionRow).update({ proposalId: id, version: row.currentVersion }, { sentAt: new Date(), sentById: actor.userId });
       await m.getRepository(ProposalRow).update({ id }, { status: "sent" });
+      await advanceProjectStage(m, row.projectId, "proposal");
       await recordAudit(m, { organizationId: actor.organizationId, actorUserId: actor.userId, action: "proposal.sent", entityType: "proposal", entityId: id, data: { version: row.currentVersion, to: project.clients.map((c) => c.email) } });
       const content = proposalContentSchema.parse(current.content);
       for (const client of project.clients) {
@@ -199,6 +201,7 @@ export function createProposalsService(dataSource: DataSource, deps: { projects:
       // The status check and the change happen in one statement so two decisions cannot both land.
       const res = await m.getRepository(ProposalRow).createQueryBuilder().update().set(decision === "approved" ? { status: "approved", approvedById: actor.userId, approvedByName: actor.displayName, approvedAt: new Date() } : { status: "changes_asked" }).where("id = :id AND status = 'sent' AND current_version = :v", { id, v: version }).execute();
       if (!res.affected) throw conflict("not_open", "This proposal changed while you were deciding; reload it.");
+      if (decision === "approved") await advanceProjectStage(m, row.projectId, "approved");
       await addComment(actor, id, decision, body || (decision === "approved" ? "Approved." : ""), version, m);
       await recordAudit(m, { organizationId: actor.organizationId, actorUserId: actor.userId, action: `proposal.${decision}`, entityType: "proposal", entityId: id, data: { version } });
       if (decision === "approved") {

@@ -17,6 +17,7 @@ import { renderClosingReport } from "./closing-report-pdf.js";
 import { VerificationRow } from "./verification.entity.js";
 import { workOrderDrafts } from "./work-order-plan.js";
 import { WorkOrderRow, WorkOrderTaskRow } from "./work-order.entity.js";
+import { advanceProjectStage } from "../projects/project-stage.js";
 
 const round1 = (v: number) => Math.round(v * 10) / 10;
 
@@ -70,7 +71,10 @@ export function createWorkOrdersService(dataSource: DataSource, deps: { projects
     await dataSource.transaction(async (m) => {
       await m.getRepository(WorkOrderTaskRow).update({ id: taskId }, { ...(patch.status ? { status: patch.status } : {}), ...(patch.assigneeMembershipId !== undefined ? { assigneeMembershipId: patch.assigneeMembershipId } : {}) });
       // Work has started once a checklist item moves after the deposit.
-      if (patch.status && patch.status !== "todo") await m.getRepository(ProposalRow).update({ id: order.proposalId, status: "deposit_paid" }, { status: "in_progress" });
+      if (patch.status && patch.status !== "todo") {
+        await m.getRepository(ProposalRow).update({ id: order.proposalId, status: "deposit_paid" }, { status: "in_progress" });
+        await advanceProjectStage(m, order.projectId, "in_progress");
+      }
       await recordAudit(m, { organizationId: actor.organizationId, actorUserId: actor.userId, action: "work_order.task_changed", entityType: "work_order", entityId: order.id, data: { taskId, ...patch } });
     });
     return list(actor, order.projectId);
@@ -113,6 +117,7 @@ export function createWorkOrdersService(dataSource: DataSource, deps: { projects
     const id = await dataSource.transaction(async (m) => {
       const inserted = await m.getRepository(VerificationRow).insert({ organizationId: actor.organizationId, projectId, proposalId: row.id, beforeLevelsDb: input.beforeLevelsDb, afterLevelsDb: input.afterLevelsDb, note: input.note, createdById: actor.userId });
       await m.getRepository(ProposalRow).update({ id: row.id }, { status: "verified" });
+      await advanceProjectStage(m, projectId, "verified");
       await recordAudit(m, { organizationId: actor.organizationId, actorUserId: actor.userId, action: "proposal.verified", entityType: "proposal", entityId: row.id, data: {} });
       return String(inserted.identifiers[0]?.id);
     });
