@@ -32,6 +32,7 @@ const envSchema = z.object({
   HUSHMARK_S3_FORCE_PATH_STYLE: z.enum(["true", "false", "1", "0", ""]).optional(),
   HUSHMARK_MAX_RECORDING_MB: z.coerce.number().positive().default(2048),
   HUSHMARK_MAX_PHOTO_MB: z.coerce.number().positive().default(15),
+  HUSHMARK_ROLE: z.enum(["all", "api", "worker"], "HUSHMARK_ROLE is all (the default), api or worker").default("all"),
   HUSHMARK_JOBS_SCHEMA: z.string().regex(/^[a-z_][a-z0-9_]*$/, "HUSHMARK_JOBS_SCHEMA must be a lower-case SQL name").default("pgboss"),
 });
 
@@ -59,6 +60,11 @@ export interface AppConfig {
   uploads: { maxRecordingBytes: number; maxPhotoBytes: number };
   /** PostgreSQL schema of the job queue (pg-boss). */
   jobsSchema: string;
+  /**
+   * What this process does: `all` serves the API and works the background jobs; `api` serves
+   * the API and only queues jobs; `worker` works the jobs and answers nothing but its health.
+   */
+  role: "all" | "api" | "worker";
 }
 
 /** Reads the configuration from the environment; throws a readable message for bad values. */
@@ -97,6 +103,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     s3: s3Config(e),
     uploads: { maxRecordingBytes: Math.round(e.HUSHMARK_MAX_RECORDING_MB * 1024 * 1024), maxPhotoBytes: Math.round(e.HUSHMARK_MAX_PHOTO_MB * 1024 * 1024) },
     jobsSchema: e.HUSHMARK_JOBS_SCHEMA,
+    role: e.HUSHMARK_ROLE,
   };
 }
 

@@ -2,7 +2,9 @@ import "reflect-metadata";
 import { createServer } from "node:http";
 import { fileURLToPath } from "node:url";
 import { pino } from "pino";
+import express from "express";
 import { createApp } from "./app.js";
+import { healthRouter } from "./http/health.js";
 import { loadConfig } from "./config.js";
 import { createDataSource } from "./data-source.js";
 
@@ -29,10 +31,18 @@ const pending = await dataSource.showMigrations();
 if (pending) logger.warn("there are migrations that have not run; run `npm run -w @hushmark/server migrate`");
 
 const { app, close } = createApp({ dataSource, config: { ...config, webDist }, logger });
-const server = createServer(app);
+// A worker process works the background jobs; its port answers only its health, for whatever
+// keeps it running (the API is served by the `api` processes).
+const server = config.role === "worker" ? createServer(workerOnly(express().use(healthRouter(dataSource)))) : createServer(app);
 server.listen(config.port, config.host, () => {
-  logger.info({ url: config.publicUrl }, "Hushmark is listening");
+  logger.info({ url: config.publicUrl, role: config.role }, config.role === "worker" ? "Hushmark worker is running" : "Hushmark is listening");
 });
+
+function workerOnly(health: express.Express): express.Express {
+  return health.use((_req, res) => {
+    res.status(404).json({ error: { code: "worker_process", message: "This process runs background jobs only; the API is served by the api processes." } });
+  });
+}
 
 let stopping = false;
 async function shutdown(signal: string) {

@@ -36,7 +36,14 @@ const RESTART_AFTER_MS = 10_000;
  * expire. If the queue cannot start (the database is away), it tries again every 10 s and on the
  * next send, so one bad moment at start-up does not leave recordings unanalysed until a restart.
  */
-export function createJobQueue(options: { databaseUrl: string; schema: string; logger: Logger; queues: QueueSpec<never>[] }): JobQueue {
+export function createJobQueue(options: {
+  databaseUrl: string;
+  schema: string;
+  logger: Logger;
+  queues: QueueSpec<never>[];
+  /** False in a process that only queues jobs (an API process beside separate workers). */
+  work?: boolean;
+}): JobQueue {
   const shutdown = new AbortController();
   const running = new Set<Promise<void>>();
   let boss: PgBoss | null = null;
@@ -50,6 +57,7 @@ export function createJobQueue(options: { databaseUrl: string; schema: string; l
       await b.start();
       for (const q of options.queues) {
         await b.createQueue(q.name, { name: q.name, retryLimit: q.retryLimit, retryDelay: q.retryDelaySeconds, expireInSeconds: q.expireInSeconds });
+        if (options.work === false) continue;
         await b.work<object>(q.name, { batchSize: 1, pollingIntervalSeconds: 0.5, includeMetadata: true }, async (jobs) => {
           for (const job of jobs) {
             const run = q.handler({ id: job.id, data: job.data as never, retryCount: job.retryCount, retryLimit: job.retryLimit, signal: shutdown.signal });

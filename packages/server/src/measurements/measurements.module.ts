@@ -28,7 +28,7 @@ export function createMeasurementsModule(deps: { dataSource: DataSource; config:
   const files = createFilesService(dataSource, storage);
   files.sweepUnfinished(3600_000).catch((error: unknown) => logger.warn({ err: error }, "could not sweep unfinished uploads"));
   const queue = recordingQueue(dataSource, files, logger, deps.options?.recordingJob);
-  const jobs = createJobQueue({ databaseUrl: config.databaseUrl, schema: config.jobsSchema, logger, queues: [queue as QueueSpec<never>] });
+  const jobs = createJobQueue({ databaseUrl: config.databaseUrl, schema: config.jobsSchema, logger, work: config.role !== "api", queues: [queue as QueueSpec<never>] });
   const measurements = createMeasurementsService(dataSource, projects, files, jobs);
   const photos = createPhotosService(dataSource, projects, files);
   const routes = [...intakeRoutes(createIntakeService(dataSource, projects)), ...measurementRoutes(measurements, photos, config.uploads)];

@@ -47,7 +47,7 @@ export function createMoneyModule(deps: { dataSource: DataSource; config: AppCon
   const priceBook = createPriceBookService(dataSource);
   const searches = createSearchRegistry(dataSource, searchOptions(config, deps.options?.searches));
   const scenarios = createScenariosService(dataSource, projects, catalogue, priceBook, searches);
-  const jobs = createJobQueue({ databaseUrl: config.databaseUrl, schema: config.jobsSchema, logger, queues: [proposalPdfQueue(dataSource, catalogue, files, logger) as QueueSpec<never>] });
+  const jobs = createJobQueue({ databaseUrl: config.databaseUrl, schema: config.jobsSchema, logger, work: config.role !== "api", queues: [proposalPdfQueue(dataSource, catalogue, files, logger) as QueueSpec<never>] });
   let proposals: ProposalsService;
   const workOrders = createWorkOrdersService(dataSource, { projects, proposals: () => proposals, files });
   proposals = createProposalsService(dataSource, {
