@@ -49,6 +49,8 @@ export const verificationSchema = z.object({
   before: z.object({ dba: z.number(), nc: z.number() }),
   after: z.object({ dba: z.number(), nc: z.number() }),
   predicted: z.object({ beforeDba: z.number(), afterDba: z.number() }),
+  /** One-third-octave levels 50–5000 Hz in the receiving room: measured before and after, and predicted after. */
+  bands: z.object({ beforeDb: z.array(z.number()), afterDb: z.array(z.number()), predictedAfterDb: z.array(z.number()) }),
   measuredGainDb: z.number(),
   predictedGainDb: z.number(),
   target: z.object({ kind: z.string(), value: z.number(), met: z.boolean() }).nullable(),

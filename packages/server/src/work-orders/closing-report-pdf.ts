@@ -68,7 +68,7 @@ function octaveChart(doc: Doc, series: readonly Series[], box: { x: number; y: n
 }
 
 /** The closing report for the client: measured before and after, the prediction and the target. */
-export function renderClosingReport(v: Verification, content: ProposalContent, measured?: MeasuredLevels): Promise<Buffer> {
+export function renderClosingReport(v: Verification, content: ProposalContent, measured: MeasuredLevels = { before: v.bands.beforeDb, after: v.bands.afterDb }): Promise<Buffer> {
   return pdfBuffer((doc) => {
     const left = doc.page.margins.left;
     const width = doc.page.width - left - doc.page.margins.right;
@@ -83,8 +83,8 @@ export function renderClosingReport(v: Verification, content: ProposalContent, m
     para(doc, `Predicted: from ${v.predicted.beforeDba} to ${v.predicted.afterDba} dBA, a drop of ${v.predictedGainDb} dB. Measured drop: ${v.measuredGainDb} dB.`);
     if (v.target) para(doc, `Target (${v.target.kind === "nc" ? `NC ${v.target.value}` : v.target.kind === "dba" ? `${v.target.value} dBA` : `${v.target.value} dB reduction`}): ${v.target.met ? "met" : "not met yet"}.`);
 
-    const before = measured ? octaves(measured.before) : null;
-    const after = measured ? octaves(measured.after) : null;
+    const before = octaves(measured.before);
+    const after = octaves(measured.after);
     const predicted = octaves(content.evaluation.after.levelsDb);
     if (before && after) {
       heading(doc, `By frequency, in ${content.evaluation.receiver.name}`, 11);

@@ -99,6 +99,7 @@ export function createWorkOrdersService(dataSource: DataSource, deps: { projects
     return {
       id: r.id, proposalId: r.proposalId, before, after,
       predicted: { beforeDba: round1(ev.before.dba), afterDba: round1(ev.after.dba) },
+      bands: { beforeDb: r.beforeLevelsDb, afterDb: r.afterLevelsDb, predictedAfterDb: ev.after.levelsDb },
       measuredGainDb: measuredGain, predictedGainDb: predictedGain,
       target: t && met !== null ? { kind: t.kind, value: t.value, met } : null,
       summary: `Measured in ${ev.receiver.name}: from ${before.dba} to ${after.dba} dBA (${measuredGain} dB quieter), ${closeness} drop of ${predictedGain} dB.${t ? (met ? " The target is met." : " The target is not met yet.") : ""}`,
@@ -147,7 +148,7 @@ export function createWorkOrdersService(dataSource: DataSource, deps: { projects
     const files = deps.files;
     let file = found.row.reportFileId ? await dataSource.getRepository(StoredFile).findOneBy({ id: found.row.reportFileId }) : null;
     if (!file) {
-      const made = await files.store({ organizationId: found.row.organizationId, userId: null }, projectId, files.fromBuffer(await renderClosingReport(found.dto, found.content, { before: found.row.beforeLevelsDb, after: found.row.afterLevelsDb }), { contentType: "application/pdf", originalName: filename }));
+      const made = await files.store({ organizationId: found.row.organizationId, userId: null }, projectId, files.fromBuffer(await renderClosingReport(found.dto, found.content), { contentType: "application/pdf", originalName: filename }));
       const taken = await dataSource.getRepository(VerificationRow).createQueryBuilder().update().set({ reportFileId: made.id }).where("id = :id AND report_file_id IS NULL", { id: verificationId }).execute();
       if (taken.affected === 0) {
         await (await dataSource.transaction((m) => files.remove(m, made)))();

@@ -13,6 +13,7 @@ import { useProjectProposals } from "../proposals/api/proposals";
 import { useMeasurements } from "../measurements/api/measurements";
 import type { Measurement } from "@hushmark/schemas";
 import { reportUrl, useAddVerification, useVerifications } from "./api/verifications";
+import { OctaveComparison } from "./octave-comparison";
 
 /** Parses 21 band levels typed or pasted with commas, spaces or new lines. */
 export function parseBands(text: string): number[] | string {
@@ -63,6 +64,7 @@ export default function VerifySection({ projectId }: { projectId: string }) {
               <div><dt className="text-muted">Predicted drop</dt><dd>{v.predictedGainDb} dB</dd></div>
               <div><dt className="text-muted">Measured drop</dt><dd>{v.measuredGainDb} dB</dd></div>
             </dl>
+            <OctaveComparison v={v} />
             {v.note ? <p>{v.note}</p> : null}
             <a className="min-h-11 content-center font-medium text-brand underline" href={reportUrl(projectId, v.id)} download>Download the closing report (PDF)</a>
           </div>
