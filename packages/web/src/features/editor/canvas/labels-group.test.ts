@@ -3,14 +3,18 @@ import { fernhollowStudioPlan } from "@hushmark/floorplan";
 import { paintLabels } from "./labels-group";
 
 /** A 2D context that measures every letter 7 px wide and records the text it is asked to draw. */
-function recordingContext(): { ctx: CanvasRenderingContext2D; texts: string[] } {
+function recordingContext(): { ctx: CanvasRenderingContext2D; texts: string[]; at: Map<string, { x: number; y: number }> } {
   const texts: string[] = [];
+  const at = new Map<string, { x: number; y: number }>();
   const target: Record<string, unknown> = {
     measureText: (t: string) => ({ width: t.length * 7 }),
-    fillText: (t: string) => texts.push(t),
+    fillText: (t: string, x: number, y: number) => {
+      texts.push(t);
+      at.set(t, { x, y });
+    },
   };
   const ctx = new Proxy(target, { get: (o, key: string) => (key in o ? o[key] : () => undefined) });
-  return { ctx: ctx as unknown as CanvasRenderingContext2D, texts };
+  return { ctx: ctx as unknown as CanvasRenderingContext2D, texts, at };
 }
 
 // About the zoom the proposal plan fits the studio at on a phone: the back room is 144 × 54 px and
@@ -26,12 +30,19 @@ describe("label order on the plan", () => {
   });
 
   it("on a read-only view every room big enough on screen is named, and pins' labels move aside or yield", () => {
-    const { ctx, texts } = recordingContext();
+    const { ctx, texts, at } = recordingContext();
     paintLabels(ctx, { plan: fernhollowStudioPlan(), ...phone, roomNamesFirst: true });
     for (const name of ["Café back room", "Café (counter", "Recording room", "Control room"]) expect(texts.some((t) => t.startsWith(name))).toBe(true);
-    // M1's label still finds room beside its ring; M2's would cover the café's name, so it yields.
+    // M1's label still finds room beside its ring. M2's would cover the café's name beside its
+    // ring, so it goes above or below the ring instead, clear of the name's row.
     expect(texts).toContain("M1 — recording room, mic position");
-    expect(texts).not.toContain("M2 — café, by the grinder");
+    expect(texts).toContain("M2 — café, by the grinder");
+    const pin = fernhollowStudioPlan().elements["pin-grinder"];
+    const label = at.get("M2 — café, by the grinder")!;
+    const name = at.get([...at.keys()].find((t) => t.startsWith("Café (counter"))!)!;
+    expect(pin?.type).toBe("pin");
+    if (pin?.type === "pin") expect(Math.abs(label.y - -pin.position.y * phone.scale)).toBeGreaterThan(9);
+    expect(Math.abs(label.y - name.y)).toBeGreaterThan(12);
   });
 
   it("keeps text off the points another layer draws markers on", () => {

@@ -121,10 +121,12 @@ export function paintLabels(ctx: CanvasRenderingContext2D, spec: PaintLabels): v
     for (const { label, reading, x, y } of pins) {
       const w = Math.max(textWidth(ctx, SMALL_FONT, label), reading ? textWidth(ctx, READING_FONT, reading) : 0) + 8;
       const h = (reading ? 2 : 1) * 15 + 4;
-      // Right of the pin if there is room, else left of it; otherwise the ring stands alone.
+      // Right of the pin if there is room, else left of it, else above or below; otherwise the
+      // ring stands alone.
       const right = { x: x + 10, y: y - h / 2, w, h }, left = { x: x - 10 - w, y: y - h / 2, w, h };
-      // A side that would run off the canvas is tried only when both would.
-      const sides = [right, left].filter(inView);
+      const above = { x: x - w / 2, y: y - 10 - h, w, h }, below = { x: x - w / 2, y: y + 10, w, h };
+      // A side that would run off the canvas is tried only when all would.
+      const sides = [right, left, above, below].filter(inView);
       const box = (sides.length ? sides : [right, left]).find((b) => grid.place(b)) ?? null;
       if (!box) continue;
       ctx.globalAlpha = 0.9; ctx.fillStyle = panel; roundRect(ctx, box, 3); ctx.fill(); ctx.globalAlpha = 1;
