@@ -1,4 +1,4 @@
-import { aWeightedTotal, bandEdges, BANDS_HZ, formatHz, ncCurves } from "./spectrum-math";
+import { aWeightedTotal, bandEdges, BANDS_HZ, formatHz, ncCurves, octaveSteps } from "./spectrum-math";
 
 export interface SpectrumSeries {
   label: string;
@@ -19,7 +19,9 @@ const x = (hz: number) => M.left + ((Math.log10(hz) - Math.log10(F_MIN)) / (Math
 
 /**
  * Band levels on a log-frequency axis: bars with a peak-hold tick for one spectrum, lines for
- * several; NC curves drawn as reference lines; the A-weighted total in the legend.
+ * several; NC curves drawn as reference lines, with one spectrum's octave-band levels as steps,
+ * since NC compares octaves and a third-octave bar sits about 5 dB below its octave; the
+ * A-weighted total in the legend.
  */
 export function SpectrumChart({ series, showNc = true, title }: { series: SpectrumSeries[]; showNc?: boolean; title: string }) {
   const values = series.flatMap((s) => [...s.leqDb, ...(s.lmaxDb ?? [])]).filter((v): v is number => v !== null && v !== undefined);
@@ -30,6 +32,7 @@ export function SpectrumChart({ series, showNc = true, title }: { series: Spectr
   const yTicks = Array.from({ length: (hi - lo) / 10 + 1 }, (_, i) => lo + i * 10);
   const single = series.length === 1;
   const clip = (db: number) => Math.max(lo, Math.min(hi, db));
+  const steps = showNc && single && series[0] ? octaveSteps(series[0].leqDb).filter((o) => o.db !== null) : [];
 
   return (
     <figure className="flex max-w-[880px] flex-col gap-2">
@@ -107,6 +110,11 @@ export function SpectrumChart({ series, showNc = true, title }: { series: Spectr
             </g>
           ),
         )}
+        {steps.map((o) => (
+          <line key={o.hz} data-testid="octave-step" x1={x(o.lowerHz)} x2={x(o.upperHz)} y1={y(clip(o.db!))} y2={y(clip(o.db!))} stroke="#7a1f3d" strokeWidth="2">
+            <title>{`${formatHz(o.hz)} Hz octave: ${o.db!.toFixed(1)} dB`}</title>
+          </line>
+        ))}
       </svg>
       <figcaption className="flex flex-wrap gap-x-5 gap-y-1 text-sm">
         {series.map((s, i) => (
@@ -121,6 +129,11 @@ export function SpectrumChart({ series, showNc = true, title }: { series: Spectr
         {single && series[0]?.lmaxDb ? (
           <span className="inline-flex items-center gap-2 text-muted">
             <span className="inline-block h-0.5 w-4 bg-ink" aria-hidden /> peak hold (Lmax)
+          </span>
+        ) : null}
+        {steps.length ? (
+          <span className="inline-flex items-center gap-2 text-muted">
+            <span className="inline-block h-0 w-4 border-t-2" style={{ borderColor: "#7a1f3d" }} aria-hidden /> octave bands, which NC compares
           </span>
         ) : null}
         {showNc ? <span className="text-muted">dashed: NC reference curves (octave bands)</span> : null}

@@ -41,3 +41,16 @@ export function formatClock(seconds: number): string {
 }
 
 export const SERIES_COLOURS = ["#1f7a74", "#c2412d", "#c98a12", "#1d2433", "#7a1f3d", "#2f8f4e"];
+
+/**
+ * Octave-band levels 63 Hz–4 kHz from one-third-octave levels 50–5000 Hz, each the energy sum of
+ * its three bands (null where one of them has no level), with the octave's band edges in Hz.
+ */
+export function octaveSteps(levels: readonly (number | null)[]): { hz: number; lowerHz: number; upperHz: number; db: number | null }[] {
+  return OCTAVE.nominalHz.slice(0, 7).map((hz, k) => {
+    const three = levels.slice(3 * k, 3 * k + 3);
+    const db = three.length === 3 && three.every((v) => v !== null && v !== undefined) ? 10 * Math.log10(three.reduce((e: number, v) => e + 10 ** (v! / 10), 0)) : null;
+    const { lowerHz, upperHz } = bandEdgesHz(OCTAVE.exactHz[k]!, 1);
+    return { hz, lowerHz, upperHz, db };
+  });
+}
