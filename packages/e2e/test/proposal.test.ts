@@ -136,6 +136,57 @@ describe("from a scenario to a paid deposit, in the browser", () => {
     await context.close();
   });
 
+  it("after the work, the surveyor picks the before and after measurements; the client reads the comparison and the report", async () => {
+    // The deposit of "Duct and outlets" was paid in the first case.
+    const { context, page, errors } = await newPage(browser);
+    await page.goto(`${baseUrl}/sign-in`);
+    await signIn(page, "surveyor@larkspur.example");
+    await page.getByRole("link", { name: /Fernhollow Audio/ }).first().click();
+    await page.getByRole("link", { name: "Verify" }).click();
+    const projectId = page.url().split("/projects/")[1]!.split("/")[0]!;
+    // Invented readings in the recording room with the condenser running, before and after the
+    // work, as the Measure section would have stored them.
+    const before = Array.from({ length: 21 }, (_, i) => Math.round((52 - i * 1.3) * 10) / 10);
+    const reading = (label: string, kind: string, leqDb: number[]) =>
+      page.request.post(`${baseUrl}/api/v1/projects/${projectId}/measurements`, { data: { label, kind, takenAt: "2026-11-30T22:00:00Z", roomId: "record", leqDb } });
+    expect((await reading("Recording room, condenser on, before", "before_work", before)).status()).toBe(201);
+    expect((await reading("Recording room, condenser on, after", "after_work", before.map((v) => v - 6))).status()).toBe(201);
+    await page.reload();
+    const proposal = page.getByLabel("Proposal");
+    await proposal.selectOption({ label: (await proposal.locator("option", { hasText: "Duct and outlets" }).first().textContent())! });
+    // Each side lists the readings of its kind first.
+    const after = page.getByLabel("After: from a measurement");
+    await expect(after.locator("option").nth(1).textContent()).resolves.toMatch(/^Recording room, condenser on, after/);
+    await after.selectOption({ index: 1 });
+    const from = page.getByLabel("Before: from a measurement");
+    await expect(from.locator("option").nth(1).textContent()).resolves.toMatch(/^Recording room, condenser on, before/);
+    await from.selectOption({ index: 1 });
+    await expect(page.getByLabel("Before (21 levels)").inputValue()).resolves.toBe(before.map((v) => v.toFixed(1)).join(" "));
+    await page.getByRole("button", { name: "Compare and save" }).click();
+    await page.getByText(/Measured in Recording room: from [\d.]+ to [\d.]+ dBA \(6 dB quieter\)/).waitFor();
+    await expect(page.getByText("Verified", { exact: true }).first().isVisible()).resolves.toBe(true);
+    expect(errors).toEqual([]);
+    await context.close();
+
+    const client = await newPage(browser);
+    await client.page.goto(`${baseUrl}/sign-in`);
+    await signIn(client.page, CLIENT);
+    await client.page.getByRole("link", { name: /Fernhollow Audio/ }).first().click();
+    await client.page.getByRole("link", { name: "Verify" }).click();
+    await client.page.getByRole("img", { name: /Octave-band levels measured before and after/ }).waitFor();
+    await client.page.getByText("Figures by octave band").click();
+    // 63 Hz octave: the energy sum of the 50, 63 and 80 Hz bands (by definition), 6 dB lower after.
+    const octave = 10 * Math.log10(before.slice(0, 3).reduce((e, v) => e + 10 ** (v / 10), 0));
+    await expect(client.page.getByRole("row", { name: /Measured before/ }).getByRole("cell").first().textContent()).resolves.toBe(octave.toFixed(1));
+    await expect(client.page.getByRole("row", { name: /Measured after/ }).getByRole("cell").first().textContent()).resolves.toBe((octave - 6).toFixed(1));
+    const report = client.page.getByRole("link", { name: "Download the closing report (PDF)" });
+    const res = await client.page.request.get(new URL((await report.getAttribute("href"))!, baseUrl).toString());
+    expect(res.status()).toBe(200);
+    expect((await res.body()).subarray(0, 5).toString()).toBe("%PDF-");
+    expect(client.errors).toEqual([]);
+    await client.context.close();
+  });
+
   it("a declined card leaves the deposit unpaid and tells the client, who can try again", async () => {
     const sentAt = new Date().toISOString();
     await plannerSends(browser, baseUrl, "Door seals", [["Studio door", "Automatic door bottom"]]);
