@@ -5,12 +5,11 @@ import PgBoss from "pg-boss";
 import supertest from "supertest";
 import type { DataSource } from "typeorm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { startMailFake, startPaymentsFake, startS3Fake, type MailFake, type PaymentsFake, type S3Fake } from "@hushmark/fakes";
-import { createDataSource } from "../src/data-source.js";
+import { startPaymentsFake, type MailFake, type PaymentsFake } from "@hushmark/fakes";
 import { messageIdFor } from "../src/outbox/outbox.js";
 import { PASSWORD, uniqueEmail, type Harness } from "./harness.js";
 import { demoPlan, pricedProject, SETUP, until } from "./money-harness.js";
-import { freePort, person, startServerProcess, type ServerProcess } from "./support/server-process.js";
+import { freePort, person, startProcessFixture, startServerProcess, type ServerProcess } from "./support/server-process.js";
 
 const JOBS_SCHEMA = `pgboss_kill_${process.pid}`;
 
@@ -20,8 +19,8 @@ const JOBS_SCHEMA = `pgboss_kill_${process.pid}`;
  * job's effect happens once, its e-mail included.
  */
 describe("server process killed", () => {
+  let fixture: Awaited<ReturnType<typeof startProcessFixture>>;
   let mail: MailFake;
-  let s3: S3Fake;
   let payments: PaymentsFake;
   let dataSource: DataSource;
   let server: ServerProcess | undefined;
@@ -33,40 +32,26 @@ describe("server process killed", () => {
   };
 
   beforeAll(async () => {
-    mail = await startMailFake();
-    s3 = await startS3Fake();
-    dataSource = createDataSource(process.env.DATABASE_URL!, { poolSize: 2 });
-    await dataSource.initialize();
-    // The server processes keep the default per-address limit on sign-ups and accepted invitations
-    // (30 per 15 min), counted in the database for loopback by every file before this one; this file
-    // makes ten, so it starts from, and leaves, empty counters.
-    await dataSource.query("DELETE FROM rate_limit_buckets");
+    fixture = await startProcessFixture(JOBS_SCHEMA, "process-kill");
+    ({ mail, dataSource } = fixture);
     port = await freePort();
     // Retries far enough apart for a new process to be up before the next delivery.
     payments = await startPaymentsFake({ webhookUrl: `http://127.0.0.1:${port}/api/v1/payments/webhook`, webhookSecret: "whsec_kill_test", retryDelaysMs: [1500, 3000, 6000, 10_000] });
     env = {
+      ...fixture.env,
       HUSHMARK_STRIPE_SECRET_KEY: "sk_test_kill",
       HUSHMARK_STRIPE_WEBHOOK_SECRET: "whsec_kill_test",
       HUSHMARK_STRIPE_HOST: "127.0.0.1",
       HUSHMARK_STRIPE_PORT: String(payments.port),
       HUSHMARK_STRIPE_PROTOCOL: "http",
       HUSHMARK_PUBLIC_URL: `http://127.0.0.1:${port}`,
-      HUSHMARK_JWT_SECRET: "a secret for the process-kill test, 32+ chars",
-      HUSHMARK_SMTP_PORT: String(mail.smtpPort),
-      HUSHMARK_MAIL_API_URL: `http://127.0.0.1:${mail.httpPort}`,
-      HUSHMARK_S3_ENDPOINT: s3.endpoint,
-      HUSHMARK_JOBS_SCHEMA: JOBS_SCHEMA,
     };
     await restart();
   }, 60_000);
   afterAll(async () => {
     await server?.kill("SIGTERM");
-    await dataSource?.query(`DROP SCHEMA IF EXISTS ${JOBS_SCHEMA} CASCADE`);
-    await dataSource?.query("DELETE FROM rate_limit_buckets");
-    await dataSource?.destroy();
     await payments?.close();
-    await mail?.close();
-    await s3?.close();
+    await fixture?.close();
   }, 60_000);
 
   it("leaves each plan at a whole revision, old or new, when killed mid-save (4 kills at random moments)", async () => {

@@ -1,12 +1,9 @@
 import "reflect-metadata";
 import supertest from "supertest";
-import type { DataSource } from "typeorm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { startMailFake, startS3Fake, type MailFake, type S3Fake } from "@hushmark/fakes";
-import { createDataSource } from "../src/data-source.js";
 import type { Harness } from "./harness.js";
 import { pricedProject, SETUP, until } from "./money-harness.js";
-import { startServerProcess, type ServerProcess } from "./support/server-process.js";
+import { startProcessFixture, startServerProcess, type ServerProcess } from "./support/server-process.js";
 
 const JOBS_SCHEMA = `pgboss_roles_${process.pid}`;
 
@@ -16,39 +13,22 @@ const JOBS_SCHEMA = `pgboss_roles_${process.pid}`;
  * the worker renders it, and the API process serves the result.
  */
 describe("an API process beside a separate worker process", () => {
-  let mail: MailFake;
-  let s3: S3Fake;
-  let dataSource: DataSource;
+  let fixture: Awaited<ReturnType<typeof startProcessFixture>>;
   let api: ServerProcess;
   let worker: ServerProcess | undefined;
-  let env: Record<string, string>;
 
   beforeAll(async () => {
-    mail = await startMailFake();
-    s3 = await startS3Fake();
-    dataSource = createDataSource(process.env.DATABASE_URL!, { poolSize: 2 });
-    await dataSource.initialize();
-    await dataSource.query("DELETE FROM rate_limit_buckets");
-    env = {
-      HUSHMARK_JWT_SECRET: "a secret for the process-role test, 32+ chars",
-      HUSHMARK_SMTP_PORT: String(mail.smtpPort),
-      HUSHMARK_MAIL_API_URL: `http://127.0.0.1:${mail.httpPort}`,
-      HUSHMARK_S3_ENDPOINT: s3.endpoint,
-      HUSHMARK_JOBS_SCHEMA: JOBS_SCHEMA,
-    };
-    api = await startServerProcess({ ...env, HUSHMARK_ROLE: "api" });
+    fixture = await startProcessFixture(JOBS_SCHEMA, "process-role");
+    api = await startServerProcess({ ...fixture.env, HUSHMARK_ROLE: "api" });
   }, 60_000);
   afterAll(async () => {
     await worker?.kill("SIGTERM");
     await api?.kill("SIGTERM");
-    await dataSource?.query(`DROP SCHEMA IF EXISTS ${JOBS_SCHEMA} CASCADE`);
-    await dataSource?.query("DELETE FROM rate_limit_buckets");
-    await dataSource?.destroy();
-    await mail?.close();
-    await s3?.close();
+    await fixture?.close();
   }, 60_000);
 
   it("queues a proposal's PDF on the API process, which the worker process renders", async () => {
+    const { dataSource, mail, env } = fixture;
     const h: Harness = { dataSource, mail, request: () => supertest.agent(api.base), close: async () => undefined };
     const p = await pricedProject(h);
     const scenario = await p.planner.post(`/api/v1/projects/${p.projectId}/scenarios`).send({ name: "Seal the studio door", setup: SETUP(p.planVersion), items: [{ priceBookItemId: p.byCode("door-bottom-auto").id, elementId: "door-studio" }] });
@@ -85,6 +65,6 @@ describe("an API process beside a separate worker process", () => {
   });
 
   it("refuses an unknown role with a message naming the choices", async () => {
-    await expect(startServerProcess({ ...env, HUSHMARK_ROLE: "everything" })).rejects.toThrow(/HUSHMARK_ROLE is all \(the default\), api or worker/);
+    await expect(startServerProcess({ ...fixture.env, HUSHMARK_ROLE: "everything" })).rejects.toThrow(/HUSHMARK_ROLE is all \(the default\), api or worker/);
   });
 });

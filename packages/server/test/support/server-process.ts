@@ -1,6 +1,8 @@
 import { spawn, type ChildProcess } from "node:child_process";
 import { createServer } from "node:net";
 import { fileURLToPath } from "node:url";
+import { startMailFake, startS3Fake } from "@hushmark/fakes";
+import { createDataSource } from "../../src/data-source.js";
 
 const serverDir = fileURLToPath(new URL("../..", import.meta.url));
 
@@ -116,4 +118,34 @@ export async function clearRateLimits(databaseUrl = process.env.DATABASE_URL): P
   } finally {
     await client.end();
   }
+}
+
+/**
+ * What a test of spawned server processes shares: the mail and object-storage fakes, a small
+ * connection to the test database, empty rate-limit counters, and the environment that points a
+ * process at them with a job-queue schema of the test's own (`jobsSchema`), dropped at the end.
+ */
+export async function startProcessFixture(jobsSchema: string, secretFor: string) {
+  const mail = await startMailFake();
+  const s3 = await startS3Fake();
+  const dataSource = createDataSource(process.env.DATABASE_URL!, { poolSize: 2 });
+  await dataSource.initialize();
+  // Spawned processes keep the default per-address limits, counted in the database for loopback
+  // by every file before this one: start from, and leave, empty counters.
+  await dataSource.query("DELETE FROM rate_limit_buckets");
+  const env: Record<string, string> = {
+    HUSHMARK_JWT_SECRET: `a secret for the ${secretFor} test, 32+ chars`,
+    HUSHMARK_SMTP_PORT: String(mail.smtpPort),
+    HUSHMARK_MAIL_API_URL: `http://127.0.0.1:${mail.httpPort}`,
+    HUSHMARK_S3_ENDPOINT: s3.endpoint,
+    HUSHMARK_JOBS_SCHEMA: jobsSchema,
+  };
+  const close = async () => {
+    await dataSource.query(`DROP SCHEMA IF EXISTS ${jobsSchema} CASCADE`);
+    await dataSource.query("DELETE FROM rate_limit_buckets");
+    await dataSource.destroy();
+    await mail.close();
+    await s3.close();
+  };
+  return { mail, s3, dataSource, env, close };
 }
