@@ -81,4 +81,4 @@ export const analysisResultSchema = z.object({
 export type AnalysisResult = z.infer<typeof analysisResultSchema>;
 
 /** An analysis target in the words the trade uses: "NC 25", "35 dBA", "10 dB quieter". */
-export const targetText = (t: NonNullable<AnalysisResult["target"]>): string => (t.kind === "nc" ? `NC ${t.value}` : t.kind === "dba" ? `${t.value} dBA` : `${t.value} dB quieter`);
+export const targetText = (t: Pick<NonNullable<AnalysisResult["target"]>, "kind" | "value">): string => (t.kind === "nc" ? `NC ${t.value}` : t.kind === "dba" ? `${t.value} dBA` : `${t.value} dB quieter`);

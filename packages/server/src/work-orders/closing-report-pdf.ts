@@ -1,16 +1,10 @@
 import { ncCurveDb, spectrum, thirdOctaveToOctave } from "@hushmark/acoustics";
-import type { ProposalContent, Verification } from "@hushmark/schemas";
+import { targetText, type ProposalContent, type Verification } from "@hushmark/schemas";
 import type PDFDocument from "pdfkit";
 import { levelPhrase } from "../proposals/plain-language.js";
 import { heading, para, pdfBuffer, pdfText } from "../proposals/proposal-pdf.js";
 
 type Doc = InstanceType<typeof PDFDocument>;
-
-/** The measured third-octave levels 50–5000 Hz in the receiving room, before and after the work. */
-export interface MeasuredLevels {
-  before: readonly number[];
-  after: readonly number[];
-}
 
 const OCTAVES_HZ = [63, 125, 250, 500, 1000, 2000, 4000];
 const octaves = (thirds: readonly number[]) => (thirds.length === 21 ? thirdOctaveToOctave(spectrum("third-octave", thirds)).values.slice(0, 7) : null);
@@ -68,7 +62,7 @@ function octaveChart(doc: Doc, series: readonly Series[], box: { x: number; y: n
 }
 
 /** The closing report for the client: measured before and after, the prediction and the target. */
-export function renderClosingReport(v: Verification, content: ProposalContent, measured: MeasuredLevels = { before: v.bands.beforeDb, after: v.bands.afterDb }): Promise<Buffer> {
+export function renderClosingReport(v: Verification, content: ProposalContent): Promise<Buffer> {
   return pdfBuffer((doc) => {
     const left = doc.page.margins.left;
     const width = doc.page.width - left - doc.page.margins.right;
@@ -81,11 +75,11 @@ export function renderClosingReport(v: Verification, content: ProposalContent, m
     para(doc, `After the work: ${v.after.dba} dBA (NC ${v.after.nc}) — ${levelPhrase(v.after.dba)}.`);
     heading(doc, "Against the prediction");
     para(doc, `Predicted: from ${v.predicted.beforeDba} to ${v.predicted.afterDba} dBA, a drop of ${v.predictedGainDb} dB. Measured drop: ${v.measuredGainDb} dB.`);
-    if (v.target) para(doc, `Target (${v.target.kind === "nc" ? `NC ${v.target.value}` : v.target.kind === "dba" ? `${v.target.value} dBA` : `${v.target.value} dB reduction`}): ${v.target.met ? "met" : "not met yet"}.`);
+    if (v.target) para(doc, `Target (${targetText(v.target)}): ${v.target.met ? "met" : "not met yet"}.`);
 
-    const before = octaves(measured.before);
-    const after = octaves(measured.after);
-    const predicted = octaves(content.evaluation.after.levelsDb);
+    const before = octaves(v.bands.beforeDb);
+    const after = octaves(v.bands.afterDb);
+    const predicted = octaves(v.bands.predictedAfterDb);
     if (before && after) {
       heading(doc, `By frequency, in ${content.evaluation.receiver.name}`, 11);
       const series: Series[] = [
